@@ -1,0 +1,15 @@
+import type { QueryInterface } from 'sequelize';
+import * as foundation from './001-foundation';
+import * as apiTokens from './002-api-tokens';
+
+export interface Migration {
+  name: string;
+  up(qi: QueryInterface): Promise<void>;
+  down(qi: QueryInterface): Promise<void>;
+}
+
+/** Applied in this order; append new migrations, never reorder or edit applied ones. */
+export const migrations: Migration[] = [
+  { name: '001-foundation', ...foundation },
+  { name: '002-api-tokens', ...apiTokens },
+];

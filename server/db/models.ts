@@ -1,0 +1,16 @@
+import type { Sequelize } from 'sequelize';
+import { Nursery } from '../nurseries/nursery.model';
+import { User } from '../users/user.model';
+import { Invitation } from '../users/invitation.model';
+import { Room } from '../rooms/room.model';
+import { Logger } from '../loggers/logger.model';
+import { LoggerPlacement } from '../loggers/loggerPlacement.model';
+
+/** Binds every model to this Sequelize and declares the associations once. */
+export function initModels(sequelize: Sequelize): void {
+  for (const model of [Nursery, User, Invitation, Room, Logger, LoggerPlacement]) model.initModel(sequelize);
+  Logger.hasMany(LoggerPlacement, { foreignKey: 'loggerId', as: 'placements' });
+  LoggerPlacement.belongsTo(Logger, { foreignKey: 'loggerId', as: 'logger' });
+  LoggerPlacement.belongsTo(Room, { foreignKey: 'roomId', as: 'room' });
+  Room.hasMany(LoggerPlacement, { foreignKey: 'roomId', as: 'loggerPlacements' });
+}

@@ -1,0 +1,45 @@
+import { join } from 'node:path';
+import { createApp } from './app';
+import { loadConfig } from './config';
+import { createMigrator } from './db/migrator';
+import { initModels } from './db/models';
+import { createSequelize } from './db/sequelize';
+import { startCaptureServer } from './mail/captureServer';
+import { createMailer } from './mail/mailer';
+import { seedDemoNursery } from './seed/demoNursery';
+
+async function main() {
+  const config = loadConfig();
+  const sequelize = createSequelize(config.databaseUrl);
+  initModels(sequelize);
+  await createMigrator(sequelize).up();
+  if (config.demo) await seedDemoNursery(sequelize);
+
+  // Without SMTP_URL, mail goes to a capture server on loopback and shows on the development inbox page.
+  const capture = config.smtpUrl ? null : await startCaptureServer({ dir: config.devMailDir });
+  const mailer = createMailer(config.smtpUrl ?? capture!.url, config.mailFrom);
+  const { app } = createApp({ config, sequelize, mailer, clientDir: join(import.meta.dirname, '..', 'dist') });
+
+  const server = app.listen(config.port, config.host, () => {
+    console.log(`\nColdknit is running at ${config.appOrigin}`);
+    if (config.demo) {
+      console.log('Demo sign-ins (password coldknit-demo): owner@example.com, staff@example.com, viewer@example.com');
+    }
+    if (capture) console.log(`E-mail is captured on ${capture.url}; read it at ${config.appOrigin}/dev/mail`);
+    console.log('Press Ctrl-C to stop.\n');
+  });
+
+  const stop = () => {
+    server.close();
+    server.closeAllConnections();
+    mailer.close();
+    void Promise.all([capture?.close(), sequelize.close()]).then(() => process.exit(0));
+  };
+  process.once('SIGINT', stop);
+  process.once('SIGTERM', stop);
+}
+
+main().catch((err) => {
+  console.error(err instanceof Error ? err.message : err);
+  process.exit(1);
+});

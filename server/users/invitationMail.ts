@@ -1,0 +1,18 @@
+import type { OutgoingMail } from '../mail/mailer';
+import { escapeHtml } from '../mail/escapeHtml';
+
+export function invitationMail(input: { to: string; nurseryName: string; inviterName: string; role: string; link: string; expiresAt: Date }): OutgoingMail {
+  const until = input.expiresAt.toUTCString();
+  const text = [
+    `${input.inviterName} has invited you to ${input.nurseryName} on Coldknit as ${input.role}.`,
+    '',
+    `Choose your password here (the link works once, until ${until}):`,
+    input.link,
+    '',
+    'If you did not expect this, ignore this message and nothing will happen.',
+  ].join('\n');
+  const html = `<p>${escapeHtml(input.inviterName)} has invited you to <strong>${escapeHtml(input.nurseryName)}</strong> on Coldknit as ${escapeHtml(input.role)}.</p>
+<p><a href="${escapeHtml(input.link)}">Choose your password</a> — the link works once, until ${escapeHtml(until)}.</p>
+<p>If you did not expect this, ignore this message and nothing will happen.</p>`;
+  return { to: input.to, subject: `You're invited to ${input.nurseryName} on Coldknit`, text, html };
+}

@@ -1,0 +1,59 @@
+import type { Express } from 'express';
+import type { Sequelize } from 'sequelize';
+import request from 'supertest';
+import { createApp } from '../../server/app';
+import { loadConfig, type AppConfig } from '../../server/config';
+import { createMigrator } from '../../server/db/migrator';
+import { initModels } from '../../server/db/models';
+import { createSequelize } from '../../server/db/sequelize';
+import { startCaptureServer, type CaptureServer } from '../../server/mail/captureServer';
+import { createMailer } from '../../server/mail/mailer';
+import type { RouteInfo } from '../../server/http/route';
+import { seedDemoNursery } from '../../server/seed/demoNursery';
+import { createTestDatabase } from './testDb';
+
+export interface TestApp {
+  app: Express;
+  routes: RouteInfo[];
+  sequelize: Sequelize;
+  config: AppConfig;
+  mail: CaptureServer;
+  close(): Promise<void>;
+}
+
+export const TEST_ORIGIN = 'http://127.0.0.1:5999';
+
+/** The real app on a fresh migrated database with the demo nursery, and a capture SMTP server on loopback. */
+export async function startTestApp(options: { seed?: boolean; env?: Record<string, string> } = {}): Promise<TestApp> {
+  process.env.BCRYPT_COST ??= '10';
+  const db = await createTestDatabase();
+  const mail = await startCaptureServer();
+  const config = loadConfig({ DATABASE_URL: db.url, APP_ORIGIN: TEST_ORIGIN, JWT_SECRET: 'x'.repeat(40), COLDKNIT_DEMO: '1', LOGIN_RATE_LIMIT: '1000', ...options.env });
+  const sequelize = createSequelize(db.url);
+  initModels(sequelize);
+  await createMigrator(sequelize).up();
+  if (options.seed !== false) await seedDemoNursery(sequelize);
+  const mailer = createMailer(mail.url, config.mailFrom);
+  const { app, routes } = createApp({ config, sequelize, mailer });
+  return {
+    app,
+    routes,
+    sequelize,
+    config,
+    mail,
+    async close() {
+      mailer.close();
+      await sequelize.close();
+      await mail.close();
+      await db.drop();
+    },
+  };
+}
+
+/** A supertest agent that keeps the session cookie, signed in as the given user. */
+export async function signIn(app: Express, email: string, password = 'coldknit-demo') {
+  const agent = request.agent(app);
+  const res = await agent.post('/api/auth/login').send({ email, password });
+  if (res.status !== 200) throw new Error(`sign-in as ${email} failed: ${res.status} ${JSON.stringify(res.body)}`);
+  return agent;
+}
