@@ -23,8 +23,8 @@ export interface TestApp {
 
 export const TEST_ORIGIN = 'http://127.0.0.1:5999';
 
-/** The real app on a fresh migrated database with the demo nursery, and a capture SMTP server on loopback. */
-export async function startTestApp(options: { seed?: boolean; env?: Record<string, string> } = {}): Promise<TestApp> {
+/** The real app (serving the built client when clientDir is given) on a fresh migrated database with the demo nursery, and a capture SMTP server on loopback. */
+export async function startTestApp(options: { seed?: boolean; env?: Record<string, string>; clientDir?: string } = {}): Promise<TestApp> {
   process.env.BCRYPT_COST ??= '10';
   const db = await createTestDatabase();
   const mail = await startCaptureServer();
@@ -34,7 +34,7 @@ export async function startTestApp(options: { seed?: boolean; env?: Record<strin
   await createMigrator(sequelize).up();
   if (options.seed !== false) await seedDemoNursery(sequelize);
   const mailer = createMailer(mail.url, config.mailFrom);
-  const { app, routes } = createApp({ config, sequelize, mailer });
+  const { app, routes } = createApp({ config, sequelize, mailer, clientDir: options.clientDir });
   return {
     app,
     routes,
