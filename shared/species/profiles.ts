@@ -78,6 +78,36 @@ const POME_STORAGE_SOURCES = {
   storageMaxC: POME_STORAGE_MAX_SOURCE,
 };
 
+type WarmCallusedParts = Omit<SpeciesProfile, 'freezeC' | 'storageMaxC' | 'sources'> & {
+  sources: Omit<SpeciesProfile['sources'], 'freezeC' | 'storageMaxC'>;
+};
+
+/** Species kept warm to callus: the common freeze alarm, and no cold-storage maximum. */
+function warmCallused({ sources, ...parts }: WarmCallusedParts): SpeciesProfile {
+  return {
+    ...parts,
+    freezeC: FREEZE_ALARM_C,
+    storageMaxC: null,
+    sources: { ...sources, freezeC: FREEZE_SOURCE, storageMaxC: NOT_COLD_STORED_SOURCE },
+  };
+}
+
+// Apricot and cherry: one published optimum of 20 °C (gb-online lists them together).
+const WARM_20C_SETTINGS = {
+  band: { minC: 18, maxC: 27 },
+  callus: { baseC: WARM_BASE_C, optLowC: 20, optHighC: 20, upperC: TISSUE_DAMAGE_C, hoursAtOptimum: BENCH_GRAFT_HOURS },
+};
+const WARM_20C_OPTIMUM_SOURCE =
+  'REFERENCES §1b gb-online 2013: apricot/cherry 20 °C (68 °F) [PRACT]; growingfruit t/70053: apricot optimum 20 °C [PRACT]. One ' +
+  'value, so the rate peaks there [DESIGN].';
+const WARM_20C_SOURCES = {
+  'callus.baseC': STONE_FRUIT_BASE_SOURCE,
+  'callus.optLowC': WARM_20C_OPTIMUM_SOURCE,
+  'callus.optHighC': WARM_20C_OPTIMUM_SOURCE,
+  'callus.upperC': TISSUE_DAMAGE_SOURCE,
+  'callus.hoursAtOptimum': `${BENCH_GRAFT_HOURS_SOURCE} No stone-fruit duration found, so the bench-graft figure is used [DESIGN].`,
+};
+
 const PROFILES: SpeciesProfile[] = [
   {
     key: 'apple',
@@ -121,37 +151,29 @@ const PROFILES: SpeciesProfile[] = [
       'callus.hoursAtOptimum': BENCH_GRAFT_HOURS_SOURCE,
     },
   },
-  {
+  warmCallused({
     key: 'peach',
     name: 'Peach / nectarine',
-    freezeC: FREEZE_ALARM_C,
     band: { minC: 18, maxC: 27 },
-    storageMaxC: null,
     callus: { baseC: WARM_BASE_C, optLowC: 18, optHighC: 26, upperC: TISSUE_DAMAGE_C, hoursAtOptimum: BENCH_GRAFT_HOURS },
     sources: {
-      freezeC: FREEZE_SOURCE,
       'band.minC': 'REFERENCES §1b growingfruit t/70053: P. persica 18–27 °C [PRACT]',
       'band.maxC': 'REFERENCES §1b growingfruit t/70053: P. persica 18–27 °C [PRACT]',
-      storageMaxC: NOT_COLD_STORED_SOURCE,
       'callus.baseC': STONE_FRUIT_BASE_SOURCE,
       'callus.optLowC': 'REFERENCES §1b gb-online 2013: peach/nectarine optimum 18–26 °C [PRACT]; Fackler ≈21 °C needed [PRACT] lies inside',
       'callus.optHighC': 'REFERENCES §1b gb-online 2013: peach/nectarine optimum 18–26 °C [PRACT]',
       'callus.upperC': TISSUE_DAMAGE_SOURCE,
       'callus.hoursAtOptimum': `${BENCH_GRAFT_HOURS_SOURCE} No stone-fruit duration found, so the bench-graft figure is used [DESIGN].`,
     },
-  },
-  {
+  }),
+  warmCallused({
     key: 'plum',
     name: 'Plum',
-    freezeC: FREEZE_ALARM_C,
     band: { minC: fahrenheitToCelsius(60), maxC: fahrenheitToCelsius(80) },
-    storageMaxC: null,
     callus: { baseC: 0, optLowC: 16, optHighC: fahrenheitToCelsius(80), upperC: TISSUE_DAMAGE_C, hoursAtOptimum: BENCH_GRAFT_HOURS },
     sources: {
-      freezeC: FREEZE_SOURCE,
       'band.minC': 'REFERENCES §1b growingfruit t/14973: peaches/plums 15.6–26.7 °C (60–80 °F) [PRACT]',
       'band.maxC': 'REFERENCES §1b growingfruit t/14973: peaches/plums 15.6–26.7 °C (60–80 °F) [PRACT]',
-      storageMaxC: NOT_COLD_STORED_SOURCE,
       'callus.baseC':
         'REFERENCES §1b Fackler via growingfruit t/9735: plum "similar to apple" [PRACT], so apple\'s 0 °C (§1a H&K [MEM]) [DESIGN]; ' +
         '§2 t/3784: Japanese plum scions budded out within a month at 5 °C [PRACT], so plum tissue is active well below 15 °C.',
@@ -160,114 +182,80 @@ const PROFILES: SpeciesProfile[] = [
       'callus.upperC': TISSUE_DAMAGE_SOURCE,
       'callus.hoursAtOptimum': `${BENCH_GRAFT_HOURS_SOURCE} No stone-fruit duration found, so the bench-graft figure is used [DESIGN].`,
     },
-  },
-  {
+  }),
+  warmCallused({
     key: 'apricot',
     name: 'Apricot',
-    freezeC: FREEZE_ALARM_C,
-    band: { minC: 18, maxC: 27 },
-    storageMaxC: null,
-    callus: { baseC: WARM_BASE_C, optLowC: 20, optHighC: 20, upperC: TISSUE_DAMAGE_C, hoursAtOptimum: BENCH_GRAFT_HOURS },
+    ...WARM_20C_SETTINGS,
     sources: {
-      freezeC: FREEZE_SOURCE,
+      ...WARM_20C_SOURCES,
       'band.minC': 'REFERENCES §1b growingfruit t/70053: apricot 18–27 °C [PRACT]',
       'band.maxC': 'REFERENCES §1b growingfruit t/70053: apricot 18–27 °C [PRACT]',
-      storageMaxC: NOT_COLD_STORED_SOURCE,
-      'callus.baseC': STONE_FRUIT_BASE_SOURCE,
-      'callus.optLowC': 'REFERENCES §1b gb-online 2013 and growingfruit t/70053: apricot optimum 20 °C [PRACT]; one value, so the rate peaks there [DESIGN]',
-      'callus.optHighC': 'REFERENCES §1b gb-online 2013 and growingfruit t/70053: apricot optimum 20 °C [PRACT]',
-      'callus.upperC': TISSUE_DAMAGE_SOURCE,
-      'callus.hoursAtOptimum': `${BENCH_GRAFT_HOURS_SOURCE} No stone-fruit duration found, so the bench-graft figure is used [DESIGN].`,
     },
-  },
-  {
+  }),
+  warmCallused({
     key: 'cherry',
     name: 'Cherry',
-    freezeC: FREEZE_ALARM_C,
-    band: { minC: 18, maxC: 27 },
-    storageMaxC: null,
-    callus: { baseC: WARM_BASE_C, optLowC: 20, optHighC: 20, upperC: TISSUE_DAMAGE_C, hoursAtOptimum: BENCH_GRAFT_HOURS },
+    ...WARM_20C_SETTINGS,
     sources: {
-      freezeC: FREEZE_SOURCE,
-      'band.minC': '[DESIGN] apricot\'s range (REFERENCES §1b t/70053 18–27 °C [PRACT]): gb-online lists cherry with apricot at 20 °C',
-      'band.maxC': '[DESIGN] apricot\'s range (REFERENCES §1b t/70053 18–27 °C [PRACT]): gb-online lists cherry with apricot at 20 °C',
-      storageMaxC: NOT_COLD_STORED_SOURCE,
-      'callus.baseC': STONE_FRUIT_BASE_SOURCE,
-      'callus.optLowC': 'REFERENCES §1b gb-online 2013: apricot/cherry 20 °C (68 °F) [PRACT]; one value, so the rate peaks there [DESIGN]',
-      'callus.optHighC': 'REFERENCES §1b gb-online 2013: apricot/cherry 20 °C (68 °F) [PRACT]',
-      'callus.upperC': TISSUE_DAMAGE_SOURCE,
-      'callus.hoursAtOptimum': `${BENCH_GRAFT_HOURS_SOURCE} No stone-fruit duration found, so the bench-graft figure is used [DESIGN].`,
+      ...WARM_20C_SOURCES,
+      'band.minC': "[DESIGN] apricot's range (REFERENCES §1b t/70053 18–27 °C [PRACT]): gb-online lists cherry with apricot at 20 °C",
+      'band.maxC': "[DESIGN] apricot's range (REFERENCES §1b t/70053 18–27 °C [PRACT]): gb-online lists cherry with apricot at 20 °C",
     },
-  },
-  {
+  }),
+  warmCallused({
     key: 'walnut',
     name: 'Walnut',
-    freezeC: FREEZE_ALARM_C,
     band: { minC: fahrenheitToCelsius(75), maxC: 29 },
-    storageMaxC: null,
     callus: { baseC: WARM_BASE_C, optLowC: 26, optHighC: 29, upperC: HOT_UPPER_C, hoursAtOptimum: HOT_CALLUS_HOURS },
     sources: {
-      freezeC: FREEZE_SOURCE,
       'band.minC': 'REFERENCES intro: walnut calluses at about 75–80 °F (24–27 °C) [PRACT]; lower end, 75 °F exactly',
       'band.maxC': 'REFERENCES §1c Paunović et al. 2010: stratification room 28–29 °C in 2004, mean take 83.4 % [PUB]',
-      storageMaxC: NOT_COLD_STORED_SOURCE,
       'callus.baseC': `${NO_WARM_BASE_SOURCE} REFERENCES §1c t/70053: "others use 18 °C, with low callus" [PRACT], so the rate is low but above 0 at 18 °C.`,
       'callus.optLowC': 'REFERENCES §1c Paunović et al. 2010: 26–28 °C (2003) [PUB]; Gandev 2009 27 °C [PUB] and Avanzato & Atefi 1997 27 °C [PUB] lie inside',
       'callus.optHighC': 'REFERENCES §1c Paunović et al. 2010: 28–29 °C (2004), the better of the two seasons [PUB]',
       'callus.upperC': HOT_UPPER_SOURCE,
       'callus.hoursAtOptimum': WALNUT_HOURS_SOURCE,
     },
-  },
-  {
+  }),
+  warmCallused({
     key: 'chestnut',
     name: 'Chestnut',
-    freezeC: FREEZE_ALARM_C,
     band: { minC: 21, maxC: 27 },
-    storageMaxC: null,
     callus: { baseC: WARM_BASE_C, optLowC: 23, optHighC: 27, upperC: HOT_UPPER_C, hoursAtOptimum: 9 * 24 },
     sources: {
-      freezeC: FREEZE_SOURCE,
       'band.minC': 'REFERENCES §1c growingfruit t/70053: chestnut 21–22 °C [PRACT]; washingtonchestnut.com: graft when highs pass ≈21 °C [PRACT]',
       'band.maxC': 'REFERENCES §1c doi 10.2478/agr-2025-0008: 26–27 °C at the graft point, 79.86 % take [PUB]',
-      storageMaxC: NOT_COLD_STORED_SOURCE,
       'callus.baseC': NO_WARM_BASE_SOURCE,
       'callus.optLowC': 'REFERENCES §1c growingfruit t/70053: high callus after 8–9 d at 23–24 °C [PRACT]',
       'callus.optHighC': 'REFERENCES §1c doi 10.2478/agr-2025-0008: hot callus at 26–27 °C [PUB]',
       'callus.upperC': HOT_UPPER_SOURCE,
       'callus.hoursAtOptimum': 'REFERENCES §1c growingfruit t/70053: high callus after 8–9 d at 23–24 °C [PRACT]; the longer, 9 d = 216 h [DESIGN]',
     },
-  },
-  {
+  }),
+  warmCallused({
     key: 'hazelnut',
     name: 'Hazelnut',
-    freezeC: FREEZE_ALARM_C,
     band: { minC: 22, maxC: 27 },
-    storageMaxC: null,
     callus: { baseC: WARM_BASE_C, optLowC: 22, optHighC: 24, upperC: HOT_UPPER_C, hoursAtOptimum: HOT_CALLUS_HOURS },
     sources: {
-      freezeC: FREEZE_SOURCE,
       'band.minC': 'REFERENCES §1c Humphrey 2019, Corylus chapter: optimum 22–24 °C ("general consensus") [PUB]',
       'band.maxC': 'REFERENCES §1c NAFEX msg00677: ≈27 °C (80 °F) callusing building [PRACT]',
-      storageMaxC: NOT_COLD_STORED_SOURCE,
       'callus.baseC': NO_WARM_BASE_SOURCE,
       'callus.optLowC': 'REFERENCES §1c Humphrey 2019: optimum 22–24 °C [PUB]',
       'callus.optHighC': 'REFERENCES §1c Humphrey 2019: optimum 22–24 °C [PUB]',
       'callus.upperC': HOT_UPPER_SOURCE,
       'callus.hoursAtOptimum': `${WALNUT_HOURS_SOURCE} No hazelnut duration found; walnut's is the nearest published nut-tree figure [DESIGN].`,
     },
-  },
-  {
+  }),
+  warmCallused({
     key: 'grape',
     name: 'Grape',
-    freezeC: FREEZE_ALARM_C,
     band: { minC: 21, maxC: 29 },
-    storageMaxC: null,
     callus: { baseC: WARM_BASE_C, optLowC: 24, optHighC: 27, upperC: HOT_UPPER_C, hoursAtOptimum: 14 * 24 },
     sources: {
-      freezeC: FREEZE_SOURCE,
       'band.minC': 'REFERENCES §1d gb-online 2013: grape 21–24 °C [PRACT]; H&K via t/9735: slow below 20 °C [PUB-2]/[MEM]',
       'band.maxC': 'REFERENCES §1d H&K via t/9735: ≥ 29 °C (85 °F) gives soft, fragile callus [PUB-2]/[MEM]',
-      storageMaxC: NOT_COLD_STORED_SOURCE,
       'callus.baseC': 'REFERENCES §1d H&K via t/9735: callusing stops below ≈15.6 °C (60 °F) [PUB-2]/[MEM]',
       'callus.optLowC': 'REFERENCES §1d H&K via t/9735: optimum 24–27 °C (75–80 °F) [PUB-2]/[MEM]',
       'callus.optHighC': 'REFERENCES §1d H&K via t/9735: optimum 24–27 °C (75–80 °F) [PUB-2]/[MEM]',
@@ -276,38 +264,30 @@ const PROFILES: SpeciesProfile[] = [
         'REFERENCES §1d northerngrapes 2012: callus in 1–3 weeks at 27–29 °C [PRACT]; the middle, 14 d = 336 h [DESIGN]. Alley & Peterson ' +
         '1977 (4–17 d at 29.5 °C [PUB]) timed cuttings, not grafts, so the longer practice figure is used.',
     },
-  },
-  {
+  }),
+  warmCallused({
     key: 'persimmon',
     name: 'Persimmon',
-    freezeC: FREEZE_ALARM_C,
     band: { minC: 21, maxC: fahrenheitToCelsius(85) },
-    storageMaxC: null,
     callus: { baseC: 10, optLowC: fahrenheitToCelsius(75), optHighC: fahrenheitToCelsius(85), upperC: HOT_UPPER_C, hoursAtOptimum: HOT_CALLUS_HOURS },
     sources: {
-      freezeC: FREEZE_SOURCE,
       'band.minC': 'REFERENCES §1d growingfruit t/70053: 21–27 °C [PRACT]; interwovenpermaculture.com: nights ideally ≥ 21 °C [PRACT]',
       'band.maxC': 'REFERENCES §1d growingfruit t/19333: 24–29 °C (75–85 °F) optimal [PRACT]; upper end, 85 °F exactly',
-      storageMaxC: NOT_COLD_STORED_SOURCE,
       'callus.baseC': 'REFERENCES §1d growingfruit t/19333: at ≈10 °C "growth almost stopped" [PRACT]',
       'callus.optLowC': 'REFERENCES §1d growingfruit t/19333: 75–85 °F optimal [PRACT]',
       'callus.optHighC': 'REFERENCES §1d growingfruit t/19333: 75–85 °F optimal [PRACT]',
       'callus.upperC': 'REFERENCES §1d growingfruit t/19333: above 32 °C too hot [PRACT]',
       'callus.hoursAtOptimum': `${WALNUT_HOURS_SOURCE} No persimmon duration found; it is hot-callused on the same pipes as walnut (REFERENCES §1c t/42763 [PRACT]) [DESIGN].`,
     },
-  },
-  {
+  }),
+  warmCallused({
     key: 'fig',
     name: 'Fig',
-    freezeC: FREEZE_ALARM_C,
     band: { minC: fahrenheitToCelsius(75), maxC: fahrenheitToCelsius(85) },
-    storageMaxC: null,
     callus: { baseC: WARM_BASE_C, optLowC: fahrenheitToCelsius(75), optHighC: fahrenheitToCelsius(85), upperC: HOT_UPPER_C, hoursAtOptimum: 14 * 24 },
     sources: {
-      freezeC: FREEZE_SOURCE,
       'band.minC': 'REFERENCES §1d growingfruit t/68316: fig 23.9–29.4 °C (75–85 °F) [PRACT]',
       'band.maxC': 'REFERENCES §1d growingfruit t/68316: fig 23.9–29.4 °C (75–85 °F) [PRACT]',
-      storageMaxC: NOT_COLD_STORED_SOURCE,
       'callus.baseC': NO_WARM_BASE_SOURCE,
       'callus.optLowC': 'REFERENCES §1d growingfruit t/68316: fig 75–85 °F [PRACT]',
       'callus.optHighC': 'REFERENCES §1d growingfruit t/68316: fig 75–85 °F [PRACT]',
@@ -316,26 +296,22 @@ const PROFILES: SpeciesProfile[] = [
         '[DESIGN] No fig duration found; grape\'s 14 d (REFERENCES §1d northerngrapes 2012: 1–3 weeks at 27–29 °C [PRACT]) is used, fig ' +
         'hardwood being callused warm in the same temperature range.',
     },
-  },
-  {
+  }),
+  warmCallused({
     key: 'pecan',
     name: 'Pecan',
-    freezeC: FREEZE_ALARM_C,
     band: { minC: 26, maxC: 28 },
-    storageMaxC: null,
     callus: { baseC: WARM_BASE_C, optLowC: 26, optHighC: 28, upperC: HOT_UPPER_C, hoursAtOptimum: HOT_CALLUS_HOURS },
     sources: {
-      freezeC: FREEZE_SOURCE,
       'band.minC': 'REFERENCES §1c growingfruit t/42763: hot pipe set at 26–28 °C for pecan [PRACT]',
       'band.maxC': 'REFERENCES §1c growingfruit t/42763: hot pipe set at 26–28 °C for pecan [PRACT]',
-      storageMaxC: NOT_COLD_STORED_SOURCE,
       'callus.baseC': 'REFERENCES §1c W. Reid: warm nights (lows in the 60s °F) help pecan callus [PRACT]; rate 0 at 60 °F [DESIGN]',
       'callus.optLowC': 'REFERENCES §1c growingfruit t/42763: 26–28 °C [PRACT]',
       'callus.optHighC': 'REFERENCES §1c growingfruit t/42763: 26–28 °C [PRACT]',
       'callus.upperC': 'REFERENCES §1c W. Reid: above 32 °C (90 °F) heat can "cook" a new graft [PRACT]',
       'callus.hoursAtOptimum': `${WALNUT_HOURS_SOURCE} Pecan and walnut are both Juglandaceae; no pecan duration found [DESIGN].`,
     },
-  },
+  }),
 ];
 
 function deepFreeze<T>(value: T): T {
