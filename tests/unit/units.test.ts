@@ -21,7 +21,7 @@ describe('temperature conversion — NIST SP 811 App. B.8/B.9 (REFERENCES §6) [
     [104, 40],
     [-40, -40],
   ];
-  it.each(checks)('%d °F → %d °C', (f, c) => {
+  it.each(checks)('%s °F → %s °C', (f, c) => {
     expect(fahrenheitToCelsius(f)).toBeCloseTo(c, 4);
     expect(celsiusToFahrenheit(fahrenheitToCelsius(f))).toBeCloseTo(f, 10);
   });
