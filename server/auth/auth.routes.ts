@@ -15,6 +15,8 @@ export function authRoutes(config: AppConfig, sequelize: Sequelize) {
     limit: config.loginRateLimit,
     standardHeaders: 'draft-8',
     legacyHeaders: false,
+    // Only failures count: a crew signing in all day on one router is not an attack.
+    skipSuccessfulRequests: true,
     keyGenerator: (req) => `${ipKeyGenerator(req.ip ?? '')}|${String(req.body?.email ?? '').toLowerCase()}`,
     handler: (_req, _res, next) => next(new ApiError(429, 'too_many_attempts', 'Too many sign-in attempts; wait 15 minutes and try again.')),
   });

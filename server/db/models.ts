@@ -5,10 +5,11 @@ import { Invitation } from '../users/invitation.model';
 import { Room } from '../rooms/room.model';
 import { Logger } from '../loggers/logger.model';
 import { LoggerPlacement } from '../loggers/loggerPlacement.model';
+import { ApiToken } from '../tokens/apiToken.model';
 
 /** Binds every model to this Sequelize and declares the associations once. */
 export function initModels(sequelize: Sequelize): void {
-  for (const model of [Nursery, User, Invitation, Room, Logger, LoggerPlacement]) model.initModel(sequelize);
+  for (const model of [Nursery, User, Invitation, ApiToken, Room, Logger, LoggerPlacement]) model.initModel(sequelize);
   Logger.hasMany(LoggerPlacement, { foreignKey: 'loggerId', as: 'placements' });
   LoggerPlacement.belongsTo(Logger, { foreignKey: 'loggerId', as: 'logger' });
   LoggerPlacement.belongsTo(Room, { foreignKey: 'roomId', as: 'room' });

@@ -1,0 +1,132 @@
+import request from 'supertest';
+import type TestAgent from 'supertest/lib/agent';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { ROLE_RANK, type Role } from '../../shared/schemas/common';
+import { signIn, startTestApp, type TestApp } from '../support/testApp';
+
+type Who = 'anonymous' | Role;
+type Agent = TestAgent | ReturnType<typeof request.agent>;
+
+/**
+ * For each route: how to make a valid request (fresh targets for destructive ones) and the status it earns
+ * when the role may use it. Roles below the route's access get 403; anonymous callers 401 unless it is public.
+ */
+interface Case {
+  prepare(owner: Agent): Promise<{ path: string; body?: unknown }>;
+  ok: number;
+}
+
+let seq = 0;
+const unique = (prefix: string) => `${prefix}-${Date.now()}-${++seq}`;
+const firstId = async (owner: Agent, path: string) => (await owner.get(path)).body[0].id as number;
+const newRoom = async (owner: Agent) => (await owner.post('/api/rooms').send({ name: unique('room'), kind: 'other' })).body.id as number;
+
+const CASES: Record<string, Case> = {
+  'GET /api/health': { prepare: async () => ({ path: '/api/health' }), ok: 200 },
+  'GET /api/meta': { prepare: async () => ({ path: '/api/meta' }), ok: 200 },
+  'GET /api/dev/mail': { prepare: async () => ({ path: '/api/dev/mail' }), ok: 404 }, // no dev inbox in tests
+  'POST /api/auth/login': { prepare: async () => ({ path: '/api/auth/login', body: { email: 'viewer@example.com', password: 'coldknit-demo' } }), ok: 200 },
+  'POST /api/auth/logout': { prepare: async () => ({ path: '/api/auth/logout' }), ok: 204 },
+  'GET /api/auth/me': { prepare: async () => ({ path: '/api/auth/me' }), ok: 200 },
+  'POST /api/auth/signup': {
+    prepare: async () => ({ path: '/api/auth/signup', body: { nurseryName: 'Matrix Test', name: 'M', email: `${unique('m')}@example.com`, password: 'long-enough-pass', timeZone: 'Europe/Berlin' } }),
+    ok: 201,
+  },
+  'POST /api/auth/password': { prepare: async () => ({ path: '/api/auth/password', body: { currentPassword: 'wrong-password', newPassword: 'another-long-pass' } }), ok: 400 },
+  'PATCH /api/auth/preferences': { prepare: async () => ({ path: '/api/auth/preferences', body: { unit: 'F' } }), ok: 200 },
+  'GET /api/users': { prepare: async () => ({ path: '/api/users' }), ok: 200 },
+  'PATCH /api/users/:id': { prepare: async (o) => ({ path: `/api/users/${await userId(o, 'staff@example.com')}`, body: { role: 'staff' } }), ok: 200 },
+  'DELETE /api/users/:id': { prepare: async (o) => ({ path: `/api/users/${await invitedUser(o)}` }), ok: 204 },
+  'GET /api/invitations': { prepare: async () => ({ path: '/api/invitations' }), ok: 200 },
+  'POST /api/invitations': { prepare: async () => ({ path: '/api/invitations', body: { email: `${unique('inv')}@example.com`, role: 'viewer' } }), ok: 201 },
+  'DELETE /api/invitations/:id': {
+    prepare: async (o) => ({ path: `/api/invitations/${(await o.post('/api/invitations').send({ email: `${unique('c')}@example.com`, role: 'viewer' })).body.id}` }),
+    ok: 204,
+  },
+  'GET /api/invitations/token/:token': { prepare: async () => ({ path: `/api/invitations/token/${'a'.repeat(43)}` }), ok: 410 },
+  'POST /api/invitations/token/:token/accept': {
+    prepare: async () => ({ path: `/api/invitations/token/${'a'.repeat(43)}/accept`, body: { name: 'X', password: 'long-enough-pass' } }),
+    ok: 410,
+  },
+  'GET /api/nursery': { prepare: async () => ({ path: '/api/nursery' }), ok: 200 },
+  'PATCH /api/nursery': { prepare: async () => ({ path: '/api/nursery', body: { timeZone: 'America/Chicago' } }), ok: 200 },
+  'GET /api/tokens': { prepare: async () => ({ path: '/api/tokens' }), ok: 200 },
+  'POST /api/tokens': { prepare: async () => ({ path: '/api/tokens', body: { name: unique('token') } }), ok: 201 },
+  'POST /api/tokens/:id/revoke': {
+    prepare: async (o) => ({ path: `/api/tokens/${(await o.post('/api/tokens').send({ name: unique('t') })).body.id}/revoke` }),
+    ok: 200,
+  },
+  'GET /api/rooms': { prepare: async () => ({ path: '/api/rooms' }), ok: 200 },
+  'GET /api/rooms/:id': { prepare: async (o) => ({ path: `/api/rooms/${await firstId(o, '/api/rooms')}` }), ok: 200 },
+  'POST /api/rooms': { prepare: async () => ({ path: '/api/rooms', body: { name: unique('room'), kind: 'cellar' } }), ok: 201 },
+  'PATCH /api/rooms/:id': { prepare: async (o) => ({ path: `/api/rooms/${await firstId(o, '/api/rooms')}`, body: { notes: 'checked' } }), ok: 200 },
+  'DELETE /api/rooms/:id': { prepare: async (o) => ({ path: `/api/rooms/${await newRoom(o)}` }), ok: 204 },
+  'GET /api/loggers': { prepare: async () => ({ path: '/api/loggers' }), ok: 200 },
+  'GET /api/loggers/:id': { prepare: async (o) => ({ path: `/api/loggers/${await firstId(o, '/api/loggers')}` }), ok: 200 },
+  'POST /api/loggers': { prepare: async () => ({ path: '/api/loggers', body: { label: unique('L') } }), ok: 201 },
+  'PATCH /api/loggers/:id': { prepare: async (o) => ({ path: `/api/loggers/${await firstId(o, '/api/loggers')}`, body: { notes: 'moved shelf' } }), ok: 200 },
+  'POST /api/loggers/:id/move': {
+    prepare: async (o) => {
+      const logger = (await o.post('/api/loggers').send({ label: unique('M') })).body.id;
+      return { path: `/api/loggers/${logger}/move`, body: { roomId: await newRoom(o) } };
+    },
+    ok: 200,
+  },
+};
+
+const SESSION_CHANGING = new Set(['/api/auth/login', '/api/auth/logout', '/api/auth/signup']);
+
+let t: TestApp;
+async function userId(owner: Agent, email: string) {
+  const users = (await owner.get('/api/users')).body as { id: number; email: string }[];
+  return users.find((u) => u.email === email)!.id;
+}
+/** A throw-away staff member, made the way users are really made: invited, then accepted through the mailed link. */
+async function invitedUser(owner: Agent) {
+  const email = `${unique('gone')}@example.com`;
+  await owner.post('/api/invitations').send({ email, role: 'staff' });
+  const mail = t.mail.messages.find((m) => m.to.includes(email))!;
+  const token = /\/invite\/([A-Za-z0-9_-]+)/.exec(mail.text)![1];
+  await request(t.app).post(`/api/invitations/token/${token}/accept`).send({ name: 'Temp', password: 'long-enough-pass' });
+  return userId(owner, email);
+}
+
+describe('role matrix: every route × every role', () => {
+  const agents = {} as Record<Who, Agent>;
+  beforeAll(async () => {
+    t = await startTestApp();
+    agents.anonymous = request.agent(t.app);
+    agents.owner = await signIn(t.app, 'owner@example.com');
+    agents.staff = await signIn(t.app, 'staff@example.com');
+    agents.viewer = await signIn(t.app, 'viewer@example.com');
+  });
+  afterAll(() => t.close());
+
+  it('has an expectation for every route the app serves, and no stale ones', () => {
+    const served = t.routes.map((r) => `${r.method} ${r.path}`).sort();
+    expect(Object.keys(CASES).sort()).toEqual(served);
+  });
+
+  for (const who of ['anonymous', 'viewer', 'staff', 'owner'] as Who[]) {
+    it(`answers ${who} with the expected status on each route`, async () => {
+      const results: string[] = [];
+      const expected: string[] = [];
+      for (const route of t.routes) {
+        const key = `${route.method} ${route.path}`;
+        const c = CASES[key];
+        const { path, body } = await c.prepare(agents.owner);
+        const status =
+          route.access === 'public' ? c.ok
+          : who === 'anonymous' ? 401
+          : route.access === 'signedIn' || ROLE_RANK[who] >= ROLE_RANK[route.access] ? c.ok
+          : 403;
+        // Routes that set or clear the session cookie get a fresh agent, so the role under test keeps its own session.
+        const agent = SESSION_CHANGING.has(route.path) ? request.agent(t.app) : agents[who];
+        const res = await agent[route.method.toLowerCase() as 'get'](path).send(body as object);
+        results.push(`${key} → ${res.status}`);
+        expected.push(`${key} → ${status}`);
+      }
+      expect(results).toEqual(expected);
+    });
+  }
+});
