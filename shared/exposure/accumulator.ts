@@ -77,15 +77,16 @@ export function createExposureAccumulator(opts: ExposureOptions): ExposureAccumu
     const startT = Math.max(t0, from);
     const endT = Math.min(t1, to);
     if (endT <= startT) return;
-    const slope = (c1 - c0) / (t1 - t0);
+    const rise = c1 - c0;
+    const duration = t1 - t0;
     let startC = c0;
     let endC = c1;
     if (startT > t0) {
-      startC = c0 + slope * (startT - t0);
+      startC = c0 + rise * ((startT - t0) / duration);
       noteValue(startC);
     }
     if (endT < t1) {
-      endC = c0 + slope * (endT - t0);
+      endC = c0 + rise * ((endT - t0) / duration);
       noteValue(endC);
     }
     addPiece(startT, startC, endT, endC);
