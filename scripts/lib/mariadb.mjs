@@ -60,7 +60,8 @@ export async function startMariadb({ baseDir, port }) {
     `--port=${port}`, '--bind-address=127.0.0.1', `--pid-file=${join(baseDir, 'mariadb.pid')}`,
     `--log-error=${join(baseDir, 'mariadb.err')}`, '--skip-name-resolve', '--innodb-buffer-pool-size=512M',
     '--max-allowed-packet=64M', '--local-infile=1', '--character-set-server=utf8mb4', '--collation-server=utf8mb4_unicode_ci'];
-  const child = spawn('mariadbd', args, { stdio: 'ignore', detached: false });
+  // Its own process group: a Ctrl-C in the terminal reaches us, and we shut the database down cleanly ourselves.
+  const child = spawn('mariadbd', args, { stdio: 'ignore', detached: true });
   let exited = false;
   child.on('exit', () => { exited = true; });
   for (let i = 0; i < 300 && !ping(socket); i++) {
