@@ -41,6 +41,8 @@ function combineLimit(list: readonly Exposure[], key: LimitKey, merge: (a: numbe
 }
 
 const add = (a: number, b: number) => a + b;
+// Wrapped: Array.reduce would pass the index and array to Math.max as extra arguments.
+const larger = (a: number, b: number) => Math.max(a, b);
 
 /**
  * Exposure of consecutive, non-overlapping pieces (a batch's placements, or one series cut in parts): hours,
@@ -87,9 +89,9 @@ export function worstOf(list: readonly Exposure[]): Exposure {
     minC: extreme(list.map((e) => e.minC), Math.min),
     maxC: extreme(list.map((e) => e.maxC), Math.max),
     meanC: bestObserved.meanC,
-    below: combineLimit(list, 'below', Math.max),
-    above: combineLimit(list, 'above', Math.max),
-    freeze: combineLimit(list, 'freeze', Math.max),
+    below: combineLimit(list, 'below', larger),
+    above: combineLimit(list, 'above', larger),
+    freeze: combineLimit(list, 'freeze', larger),
     integralCH: bestObserved.integralCH,
   };
   const first = list[0].callus;
