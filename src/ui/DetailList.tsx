@@ -1,0 +1,15 @@
+import type { ReactNode } from 'react';
+
+/** Label–value pairs, side by side on wide screens and stacked on phones. */
+export function DetailList({ items }: { items: { label: string; value: ReactNode; figure?: boolean }[] }) {
+  return (
+    <dl className="grid grid-cols-1 gap-x-6 gap-y-3 sm:grid-cols-[max-content_1fr]">
+      {items.map((item) => (
+        <div key={item.label} className="contents">
+          <dt className="font-semibold text-ink-soft">{item.label}</dt>
+          <dd className={`min-w-0 break-words whitespace-pre-line ${item.figure ? 'font-mono' : ''}`}>{item.value}</dd>
+        </div>
+      ))}
+    </dl>
+  );
+}
