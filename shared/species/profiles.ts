@@ -15,11 +15,11 @@ const FREEZE_SOURCE =
 /** Below this the warm-callused species are taken to make no callus (rate 0). */
 const WARM_BASE_C = fahrenheitToCelsius(60);
 const STONE_FRUIT_BASE_SOURCE =
-  'REFERENCES intro: "peach and other stone fruit callus poorly below about 60 °F (15.6 °C)" [PRACT]; §1b growingfruit t/14973 ' +
+  'REFERENCES opening trade facts: "peach and other stone fruit callus poorly below about 60 °F (15.6 °C)" [PRACT]; §1b growingfruit t/14973 ' +
   'peaches/plums 60–80 °F [PRACT]. Rate taken as 0 there [DESIGN].';
 const NO_WARM_BASE_SOURCE =
   '[DESIGN] No minimum found in REFERENCES for this species; 60 °F (15.6 °C), where the trade says stone fruit stop callusing ' +
-  '(REFERENCES intro [PRACT]), is used for every warm-callused species without its own figure.';
+  '(REFERENCES opening trade facts [PRACT]), is used for every warm-callused species without its own figure.';
 
 const TISSUE_DAMAGE_C = 30;
 const TISSUE_DAMAGE_SOURCE = 'REFERENCES §1b gb-online 2013: "tissue damage … over 30 °C (86 °F)" for all temperate fruit [PRACT]';
@@ -30,7 +30,7 @@ const HOT_UPPER_SOURCE =
   'growingfruit t/19333 (persimmon): above 32 °C too hot [PRACT]; §1a H&K via t/9735 (apple): callusing "retarded" above 32 °C [PUB-2].';
 
 const NOT_COLD_STORED_SOURCE =
-  '[DESIGN] null: kept warm to callus (REFERENCES intro: stone fruit and nut trees need warmth [PRACT]); the band maximum already ' +
+  '[DESIGN] null: kept warm to callus (REFERENCES opening trade facts: stone fruit and nut trees need warmth [PRACT]); the band maximum already ' +
   'flags too much heat, and "too warm for cold storage" does not apply.';
 
 /** Raintree 2019's bench-graft figure is the only callusing duration in REFERENCES for temperate fruit. */
@@ -209,7 +209,7 @@ const PROFILES: SpeciesProfile[] = [
     band: { minC: fahrenheitToCelsius(75), maxC: 29 },
     callus: { baseC: WARM_BASE_C, optLowC: 26, optHighC: 29, upperC: HOT_UPPER_C, hoursAtOptimum: HOT_CALLUS_HOURS },
     sources: {
-      'band.minC': 'REFERENCES intro: walnut calluses at about 75–80 °F (24–27 °C) [PRACT]; lower end, 75 °F exactly',
+      'band.minC': 'REFERENCES opening trade facts: walnut calluses at about 75–80 °F (24–27 °C) [PRACT]; lower end, 75 °F exactly',
       'band.maxC': 'REFERENCES §1c Paunović et al. 2010: stratification room 28–29 °C in 2004, mean take 83.4 % [PUB]',
       'callus.baseC': `${NO_WARM_BASE_SOURCE} REFERENCES §1c t/70053: "others use 18 °C, with low callus" [PRACT], so the rate is low but above 0 at 18 °C.`,
       'callus.optLowC': 'REFERENCES §1c Paunović et al. 2010: 26–28 °C (2003) [PUB]; Gandev 2009 27 °C [PUB] and Avanzato & Atefi 1997 27 °C [PUB] lie inside',
