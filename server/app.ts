@@ -3,6 +3,7 @@ import { join } from 'node:path';
 import cookieParser from 'cookie-parser';
 import express, { type Express } from 'express';
 import helmet from 'helmet';
+import type { Pool } from 'mariadb';
 import type { Sequelize } from 'sequelize';
 import { authenticate } from './auth/authenticate';
 import { authRoutes } from './auth/auth.routes';
@@ -21,6 +22,8 @@ import { userRoutes } from './users/users.routes';
 export interface AppDeps {
   config: AppConfig;
   sequelize: Sequelize;
+  /** The connector pool for readings (bulk insert and streaming). */
+  pool: Pool;
   mailer: Mailer;
   /** The built client; served with a fallback to index.html for client-side routes. */
   clientDir?: string;

@@ -2,23 +2,22 @@ import { join } from 'node:path';
 import { createApp } from './app';
 import { loadConfig } from './config';
 import { createMigrator } from './db/migrator';
-import { initModels } from './db/models';
-import { createSequelize } from './db/sequelize';
+import { openDatabase } from './db/database';
 import { startCaptureServer } from './mail/captureServer';
 import { createMailer } from './mail/mailer';
 import { seedDemoNursery } from './seed/demoNursery';
 
 async function main() {
   const config = loadConfig();
-  const sequelize = createSequelize(config.databaseUrl);
-  initModels(sequelize);
+  const db = openDatabase(config.databaseUrl);
+  const { sequelize } = db;
   await createMigrator(sequelize).up();
-  if (config.demo) await seedDemoNursery(sequelize);
+  if (config.demo) await seedDemoNursery(sequelize, db.pool);
 
   // Without SMTP_URL, mail goes to a capture server on loopback and shows on the development inbox page.
   const capture = config.smtpUrl ? null : await startCaptureServer({ dir: config.devMailDir });
   const mailer = createMailer(config.smtpUrl ?? capture!.url, config.mailFrom);
-  const { app } = createApp({ config, sequelize, mailer, clientDir: join(import.meta.dirname, '..', 'dist') });
+  const { app } = createApp({ config, sequelize, pool: db.pool, mailer, clientDir: join(import.meta.dirname, '..', 'dist') });
 
   const server = app.listen(config.port, config.host, () => {
     console.log(`\nColdknit is running at ${config.appOrigin}`);
@@ -33,7 +32,7 @@ async function main() {
     server.close();
     server.closeAllConnections();
     mailer.close();
-    void Promise.all([capture?.close(), sequelize.close()]).then(() => process.exit(0));
+    void Promise.all([capture?.close(), db.close()]).then(() => process.exit(0));
   };
   process.once('SIGINT', stop);
   process.once('SIGTERM', stop);

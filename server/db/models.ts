@@ -6,10 +6,11 @@ import { Room } from '../rooms/room.model';
 import { Logger } from '../loggers/logger.model';
 import { LoggerPlacement } from '../loggers/loggerPlacement.model';
 import { ApiToken } from '../tokens/apiToken.model';
+import { Import } from '../imports/import.model';
 
 /** Binds every model to this Sequelize and declares the associations once. */
 export function initModels(sequelize: Sequelize): void {
-  for (const model of [Nursery, User, Invitation, ApiToken, Room, Logger, LoggerPlacement]) model.initModel(sequelize);
+  for (const model of [Nursery, User, Invitation, ApiToken, Room, Logger, LoggerPlacement, Import]) model.initModel(sequelize);
   Logger.hasMany(LoggerPlacement, { foreignKey: 'loggerId', as: 'placements' });
   LoggerPlacement.belongsTo(Logger, { foreignKey: 'loggerId', as: 'logger' });
   LoggerPlacement.belongsTo(Room, { foreignKey: 'roomId', as: 'room' });

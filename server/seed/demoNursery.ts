@@ -1,3 +1,4 @@
+import type { Pool } from 'mariadb';
 import type { Sequelize } from 'sequelize';
 import { hashPassword } from '../auth/password';
 import { Logger } from '../loggers/logger.model';
@@ -6,16 +7,22 @@ import { Nursery } from '../nurseries/nursery.model';
 import { Room } from '../rooms/room.model';
 import { User } from '../users/user.model';
 import { DEMO_PASSWORD, DEMO_USERS } from './demoAccounts';
+import { topUpDemoReadings } from './demoReadings';
 import { DEMO_LOGGERS, DEMO_NURSERY, DEMO_ROOMS, DEMO_SEASON_START } from './demoData';
 
 /**
- * Seeds the invented demo nursery once: a restart finds its owner and leaves everything as it is,
- * so changes made while trying the demo survive.
+ * Seeds the invented demo nursery once: a restart finds its owner and leaves its records as they are, so changes made
+ * while trying the demo survive; only the demo loggers' readings are brought up to now.
  */
-export async function seedDemoNursery(sequelize: Sequelize): Promise<void> {
-  if (await User.findOne({ where: { email: DEMO_USERS[0].email } })) return;
+export async function seedDemoNursery(sequelize: Sequelize, pool: Pool): Promise<void> {
+  const owner = await User.findOne({ where: { email: DEMO_USERS[0].email } });
+  const nurseryId = owner ? owner.nurseryId : await createDemoRecords(sequelize);
+  await topUpDemoReadings(pool, nurseryId);
+}
+
+async function createDemoRecords(sequelize: Sequelize): Promise<number> {
   const passwordHash = await hashPassword(DEMO_PASSWORD);
-  await sequelize.transaction(async (transaction) => {
+  const nurseryId = await sequelize.transaction(async (transaction) => {
     const nursery = await Nursery.create(DEMO_NURSERY, { transaction });
     for (const u of DEMO_USERS) await User.create({ ...u, nurseryId: nursery.id, passwordHash }, { transaction });
     const rooms = new Map<string, Room>();
@@ -24,6 +31,8 @@ export async function seedDemoNursery(sequelize: Sequelize): Promise<void> {
       const logger = await Logger.create({ nurseryId: nursery.id, label: l.label, serial: l.serial, notes: l.notes }, { transaction });
       await LoggerPlacement.create({ loggerId: logger.id, roomId: rooms.get(l.room)!.id, placedFrom: DEMO_SEASON_START }, { transaction });
     }
+    return nursery.id;
   });
   console.log(`Seeded the demo nursery "${DEMO_NURSERY.name}".`);
+  return nurseryId;
 }

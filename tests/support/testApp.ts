@@ -1,11 +1,11 @@
 import type { Express } from 'express';
+import type { Pool } from 'mariadb';
 import type { Sequelize } from 'sequelize';
 import request from 'supertest';
 import { createApp } from '../../server/app';
 import { loadConfig, type AppConfig } from '../../server/config';
 import { createMigrator } from '../../server/db/migrator';
-import { initModels } from '../../server/db/models';
-import { createSequelize } from '../../server/db/sequelize';
+import { openDatabase } from '../../server/db/database';
 import { startCaptureServer, type CaptureServer } from '../../server/mail/captureServer';
 import { createMailer } from '../../server/mail/mailer';
 import type { RouteInfo } from '../../server/http/route';
@@ -16,6 +16,7 @@ export interface TestApp {
   app: Express;
   routes: RouteInfo[];
   sequelize: Sequelize;
+  pool: Pool;
   config: AppConfig;
   mail: CaptureServer;
   close(): Promise<void>;
@@ -29,21 +30,22 @@ export async function startTestApp(options: { seed?: boolean; env?: Record<strin
   const db = await createTestDatabase();
   const mail = await startCaptureServer();
   const config = loadConfig({ DATABASE_URL: db.url, APP_ORIGIN: TEST_ORIGIN, JWT_SECRET: 'x'.repeat(40), COLDKNIT_DEMO: '1', LOGIN_RATE_LIMIT: '1000', ...options.env });
-  const sequelize = createSequelize(db.url);
-  initModels(sequelize);
+  const database = openDatabase(db.url);
+  const { sequelize, pool } = database;
   await createMigrator(sequelize).up();
-  if (options.seed !== false) await seedDemoNursery(sequelize);
+  if (options.seed !== false) await seedDemoNursery(sequelize, pool);
   const mailer = createMailer(mail.url, config.mailFrom);
-  const { app, routes } = createApp({ config, sequelize, mailer, clientDir: options.clientDir });
+  const { app, routes } = createApp({ config, sequelize, pool, mailer, clientDir: options.clientDir });
   return {
     app,
     routes,
     sequelize,
+    pool,
     config,
     mail,
     async close() {
       mailer.close();
-      await sequelize.close();
+      await database.close();
       await mail.close();
       await db.drop();
     },

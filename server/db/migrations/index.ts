@@ -1,6 +1,7 @@
 import type { QueryInterface } from 'sequelize';
 import * as foundation from './001-foundation';
 import * as apiTokens from './002-api-tokens';
+import * as readingsImports from './003-readings-imports';
 
 export interface Migration {
   name: string;
@@ -12,4 +13,5 @@ export interface Migration {
 export const migrations: Migration[] = [
   { name: '001-foundation', ...foundation },
   { name: '002-api-tokens', ...apiTokens },
+  { name: '003-readings-imports', ...readingsImports },
 ];
