@@ -17,6 +17,7 @@ export interface LocalTimeResolver {
 }
 
 const MINUTE = 60_000;
+const HOUR = 3_600_000;
 const DAY = 86_400_000;
 
 export function createLocalTimeResolver(zone: string, order: 'ascending' | 'descending'): LocalTimeResolver {
@@ -52,6 +53,10 @@ class IanaResolver implements LocalTimeResolver {
   private cachedDay = Number.NaN;
   /** Offset in minutes for every time of the cached local day, or NaN when a change falls near it. */
   private cachedDayOffset = Number.NaN;
+  /** Offsets at UTC midnights, each asked of the zone once (a day's check shares them with its neighbours). */
+  private readonly midnightOffsets = new Map<number, number>();
+  private cachedHour = Number.NaN;
+  private cachedHourOffset = Number.NaN;
 
   constructor(zone: IANAZone, order: 'ascending' | 'descending') {
     this.zone = zone;
@@ -66,19 +71,45 @@ class IanaResolver implements LocalTimeResolver {
       this.cachedDayOffset = this.steadyOffset(day);
     }
     if (!Number.isNaN(this.cachedDayOffset)) return localMs - this.cachedDayOffset * MINUTE;
+    // Near a change, an hour that starts and ends on the same single offset has it throughout.
+    const hour = Math.floor(localMs / HOUR);
+    if (hour !== this.cachedHour) {
+      this.cachedHour = hour;
+      const start = this.validOffsets(hour * HOUR);
+      const end = this.validOffsets((hour + 1) * HOUR - 1);
+      this.cachedHourOffset = start.length === 1 && end.length === 1 && start[0] === end[0] ? start[0] : Number.NaN;
+    }
+    if (!Number.isNaN(this.cachedHourOffset)) return localMs - this.cachedHourOffset * MINUTE;
     return this.nearChange(localMs, previousUtc);
   }
 
   /** The offset of a local day when the zone keeps one offset from a day before it to a day after it. */
   private steadyOffset(day: number): number {
-    const before = this.offsetAt((day - 1) * DAY);
-    const after = this.offsetAt((day + 2) * DAY);
+    const before = this.offsetAtMidnight(day - 1);
+    const after = this.offsetAtMidnight(day + 2);
     return before === after ? before : Number.NaN;
   }
 
-  private nearChange(localMs: number, previousUtc: number | null): number | string {
+  private offsetAtMidnight(day: number): number {
+    let offset = this.midnightOffsets.get(day);
+    if (offset === undefined) {
+      offset = this.offsetAt(day * DAY);
+      this.midnightOffsets.set(day, offset);
+    }
+    return offset;
+  }
+
+  /**
+   * Offsets under which a local time exists: none in the spring gap, two in the repeated autumn hour.
+   * Any offset in force within a day either side is a candidate (zones change at most once in that span).
+   */
+  private validOffsets(localMs: number): number[] {
     const candidates = new Set([this.offsetAt(localMs - DAY), this.offsetAt(localMs + DAY)]);
-    const valid = [...candidates].filter((offset) => this.offsetAt(localMs - offset * MINUTE) === offset);
+    return [...candidates].filter((offset) => this.offsetAt(localMs - offset * MINUTE) === offset);
+  }
+
+  private nearChange(localMs: number, previousUtc: number | null): number | string {
+    const valid = this.validOffsets(localMs);
     if (valid.length === 0) {
       return `local time ${formatLocal(localMs)} does not exist in ${this.zoneName} (the clocks went forward then)`;
     }

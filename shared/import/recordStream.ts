@@ -42,6 +42,8 @@ export async function streamRecords(source: ByteSourceFactory, options: RecordSt
     max_record_size: options.maxLineBytes,
   });
   let line = options.skipLines + 1;
+  // Only a quoted field can hold a line break; files without any quote skip the count.
+  let quotesSeen = false;
   let handlerFailure: unknown = null;
   let parserFailure: unknown = null;
   parser.on('data', (fields: string[]) => {
@@ -51,7 +53,7 @@ export async function streamRecords(source: ByteSourceFactory, options: RecordSt
     } catch (error) {
       handlerFailure = error;
     }
-    line += 1 + embeddedLineBreaks(fields, newlineChar);
+    line += quotesSeen ? 1 + embeddedLineBreaks(fields, newlineChar) : 1;
   });
   parser.on('error', (error) => {
     parserFailure ??= error;
@@ -63,6 +65,7 @@ export async function streamRecords(source: ByteSourceFactory, options: RecordSt
   const skipper = new LineSkipper(options.skipLines, newlineChar, options.maxLineBytes);
   const write = (text: string) =>
     new Promise<void>((resolve) => {
+      if (!quotesSeen && text.includes('"')) quotesSeen = true;
       if (text === '') resolve();
       else parser.write(text, () => resolve());
     });

@@ -2,6 +2,7 @@ import { fahrenheitToCelsius, PLAUSIBLE_MAX_C, PLAUSIBLE_MIN_C, readHumidityCell
 import type { TimestampPlan } from './columnRoles';
 import { clip, readDateAndTime, readDateTime, readEpoch, type WrittenTimeOutcome } from './dateTimeText';
 import type { LocalTimeResolver } from './localTime';
+import { SeenReadings } from './seenReadings';
 import { mixedUnits } from './temperatureUnit';
 import { MAX_NOTED_LINES, type LineNote, type Reading, type RowCounts, type TemperatureUnit } from './types';
 
@@ -21,7 +22,7 @@ const SYMBOL: Record<TemperatureUnit, string> = { C: '°C', F: '°F' };
 /**
  * Reads each data row and accounts for it: accepted, rejected (with its reason), duplicate (same time
  * and reading as an earlier row) or conflict (same time, different reading; the first one is kept).
- * Times already seen are kept in a Map of numbers, the only per-file memory the reader needs.
+ * Readings already accepted are kept as numbers (SeenReadings), the only per-file memory the reader needs.
  */
 export class RowAccountant {
   readonly counts: RowCounts = { total: 0, accepted: 0, rejected: 0, duplicates: 0, conflicts: 0 };
@@ -31,10 +32,7 @@ export class RowAccountant {
   last: number | null = null;
   pending: Reading[] = [];
 
-  private readonly seen = new Map<number, number>();
-  private readonly seenC: number[] = [];
-  private readonly seenRh: number[] = [];
-  private readonly seenLine: number[] = [];
+  private readonly seen = new SeenReadings();
   private previousUtc: number | null = null;
 
   constructor(private readonly plan: RowPlan) {}
@@ -62,26 +60,23 @@ export class RowAccountant {
       this.reject(line, rh);
       return;
     }
-    const earlier = this.seen.get(t);
-    if (earlier !== undefined) {
-      const sameRh = rh === null ? Number.isNaN(this.seenRh[earlier]) : this.seenRh[earlier] === rh;
-      if (this.seenC[earlier] === c && sameRh) {
+    const seen = this.seen;
+    if (seen.find(t)) {
+      const sameRh = rh === null ? Number.isNaN(seen.foundRh) : seen.foundRh === rh;
+      if (seen.foundC === c && sameRh) {
         this.counts.duplicates++;
       } else {
         this.counts.conflicts++;
         if (this.conflictLines.length < MAX_NOTED_LINES) {
           this.conflictLines.push({
             line,
-            reason: `same time as line ${this.seenLine[earlier]} but a different reading (${round(this.seenC[earlier])} °C there, ${round(c)} °C here); line ${this.seenLine[earlier]} kept`,
+            reason: `same time as line ${seen.foundLine} but a different reading (${round(seen.foundC)} °C there, ${round(c)} °C here); line ${seen.foundLine} kept`,
           });
         }
       }
       return;
     }
-    this.seen.set(t, this.seenC.length);
-    this.seenC.push(c);
-    this.seenRh.push(rh ?? Number.NaN);
-    this.seenLine.push(line);
+    seen.add(t, c, rh ?? Number.NaN, line);
     this.counts.accepted++;
     if (this.first === null || t < this.first) this.first = t;
     if (this.last === null || t > this.last) this.last = t;
