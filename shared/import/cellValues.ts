@@ -58,11 +58,6 @@ export function hasDecimalComma(raw: string): boolean {
   return /^\s*[+-]?\d*,\d+/.test(raw);
 }
 
-/** °C = (°F − 32) / 1.8, exact by definition (NIST SP 811, App. B.8; REFERENCES §6). */
-export function fahrenheitToCelsius(f: number): number {
-  return (f - 32) / 1.8;
-}
-
 /** Readings outside this range are taken as sensor faults rather than room temperatures (design choice). */
 export const PLAUSIBLE_MIN_C = -50;
 export const PLAUSIBLE_MAX_C = 70;

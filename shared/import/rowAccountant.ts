@@ -1,4 +1,5 @@
-import { fahrenheitToCelsius, PLAUSIBLE_MAX_C, PLAUSIBLE_MIN_C, readHumidityCell, readTemperatureCell } from './cellValues';
+import { fahrenheitToCelsius } from '../units';
+import { PLAUSIBLE_MAX_C, PLAUSIBLE_MIN_C, readHumidityCell, readTemperatureCell } from './cellValues';
 import type { TimestampPlan } from './columnRoles';
 import { clip, readDateAndTime, readDateTime, readEpoch, type WrittenTimeOutcome } from './dateTimeText';
 import type { LocalTimeResolver } from './localTime';
