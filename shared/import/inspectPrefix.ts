@@ -37,7 +37,7 @@ export function inspectPrefix(prefix: Prefix, options: ReadOptions): PrefixFindi
   const table = readPrefixTable(prefixLines(text, lineEnding, prefix.complete), lineEnding);
   const rows = table.dataRows.map((row) => row.fields);
   const roles = findColumnRoles(table.header, rows);
-  const preambleTexts = table.preamble.map((row) => row.fields.join(' ').replace(/\s+/g, ' ').trim());
+  const preambleTexts = table.preamble.map((row) => preambleText(row.fields));
   const unit = decideUnit({
     headerName: table.header?.[roles.temperatureColumn] ?? null,
     cells: rows.map((row) => row[roles.temperatureColumn] ?? ''),
@@ -65,6 +65,12 @@ export function inspectPrefix(prefix: Prefix, options: ReadOptions): PrefixFindi
     else orderEvidence = new DateOrderEvidence(usual);
   }
   return { encoding, table, roles, unit, decimalComma, loggerHint, sampleDates, dateOrder, orderEvidence };
+}
+
+/** A preamble line as "key: value" text: in a delimited preamble ("Serial no.;40177") the delimiter is the colon. */
+function preambleText(fields: string[]): string {
+  const text = fields.length < 2 ? (fields[0] ?? '') : `${fields[0].replace(/\s*[:=]\s*$/, '')}: ${fields.slice(1).join(' ')}`;
+  return text.replace(/\s+/g, ' ').trim();
 }
 
 /** The timestamp text of each row, as the date-order evidence takes it. */

@@ -1,4 +1,4 @@
-import { FixedOffsetZone, IANAZone } from 'luxon';
+import { IANAZone } from 'luxon';
 import { ImportError } from './importError';
 
 /**
@@ -23,8 +23,7 @@ const DAY = 86_400_000;
 export function createLocalTimeResolver(zone: string, order: 'ascending' | 'descending'): LocalTimeResolver {
   const fixed = parseFixedOffset(zone);
   if (fixed !== null) {
-    const name = FixedOffsetZone.instance(fixed).name;
-    return { zoneName: name === 'UTC' ? 'UTC' : name.replace(/^UTC/, ''), toUtc: (localMs) => localMs - fixed * MINUTE };
+    return { zoneName: offsetName(fixed), toUtc: (localMs) => localMs - fixed * MINUTE };
   }
   if (!IANAZone.isValidZone(zone)) {
     throw new ImportError(
@@ -44,6 +43,14 @@ export function parseFixedOffset(text: string): number | null {
   const minutes = Number(match[2]) * 60 + Number(match[3] ?? '0');
   if (minutes > 14 * 60 || Number(match[3] ?? '0') > 59) return null;
   return (match[1] === '-' ? -1 : 1) * minutes;
+}
+
+/** 60 → "+01:00", -330 → "-05:30", 0 → "UTC". */
+function offsetName(minutes: number): string {
+  if (minutes === 0) return 'UTC';
+  const size = Math.abs(minutes);
+  const two = (n: number) => String(n).padStart(2, '0');
+  return `${minutes < 0 ? '-' : '+'}${two(Math.floor(size / 60))}:${two(size % 60)}`;
 }
 
 class IanaResolver implements LocalTimeResolver {
