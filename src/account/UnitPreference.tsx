@@ -20,7 +20,7 @@ export function UnitPreference() {
         {TEMPERATURE_UNITS.map((unit) => (
           <label
             key={unit}
-            className="cursor-pointer rounded px-4 py-1.5 font-mono font-semibold text-slate has-checked:bg-slate has-checked:text-paper has-focus-visible:outline-3 has-focus-visible:outline-ice"
+            className="relative cursor-pointer rounded px-4 py-1.5 font-mono font-semibold text-slate has-checked:bg-slate has-checked:text-paper has-focus-visible:outline-3 has-focus-visible:outline-ice"
           >
             <input
               type="radio"
@@ -28,7 +28,8 @@ export function UnitPreference() {
               value={unit}
               checked={shown === unit}
               onChange={() => setUnit.mutate({ unit })}
-              className="sr-only"
+              // Transparent over the whole label, so the real radio button takes the click and keeps its keyboard behaviour.
+              className="absolute inset-0 cursor-pointer opacity-0"
             />
             {UNIT_LABEL[unit]}
           </label>

@@ -70,14 +70,14 @@ export function useInvitationPreview(token: string) {
   });
 }
 
+/**
+ * Signing out loads the sign-in page afresh: nothing of the account stays in memory, and the session gate does not
+ * mistake a deliberate sign-out for an expired session (which would bring the next person back to this page).
+ */
 export function useSignOut() {
-  const client = useQueryClient();
   return useMutation({
     mutationFn: () => api.post<void>('/auth/logout'),
-    onSuccess: () => {
-      client.removeQueries({ predicate: (q) => q.queryKey[0] !== sessionKey[0] });
-      client.setQueryData(sessionKey, null);
-    },
+    onSuccess: () => window.location.replace('/sign-in'),
   });
 }
 

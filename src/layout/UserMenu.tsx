@@ -1,5 +1,5 @@
 import { useEffect, useId, useRef, useState } from 'react';
-import { Link, useLocation, useNavigate } from 'react-router-dom';
+import { Link, useLocation } from 'react-router-dom';
 import { UnitPreference } from '../account/UnitPreference';
 import { useSignOut } from '../auth/queries';
 import { useCurrentSession } from '../auth/useCurrentSession';
@@ -24,7 +24,6 @@ export function UserMenu() {
   const { user, nursery } = useCurrentSession();
   const meta = useMeta();
   const signOut = useSignOut();
-  const navigate = useNavigate();
   const location = useLocation();
   const [open, setOpen] = useState(false);
   const panelId = useId();
@@ -96,7 +95,7 @@ export function UserMenu() {
           className="mt-3 w-full"
           busy={signOut.isPending}
           busyLabel="Signing out…"
-          onClick={() => signOut.mutate(undefined, { onSuccess: () => navigate('/sign-in', { replace: true }) })}
+          onClick={() => signOut.mutate()}
         >
           Sign out
         </Button>

@@ -23,7 +23,13 @@ export function useCreateRoom() {
   const client = useQueryClient();
   return useMutation({
     mutationFn: (body: z.output<typeof roomBody>) => api.post<Room>('/rooms', body),
-    onSuccess: () => client.invalidateQueries({ queryKey: roomKeys.all }),
+    onSuccess: (room) => {
+      // Written into the cached list at once: a form opened next (a logger placed in this room) reads the list
+      // before any refetch could finish, and must already find the new room there.
+      client.setQueryData(roomKeys.detail(room.id), room);
+      client.setQueryData<Room[]>(roomKeys.list(), (old) => old && [...old, room].sort((a, b) => a.name.localeCompare(b.name)));
+      return client.invalidateQueries({ queryKey: roomKeys.list() });
+    },
   });
 }
 

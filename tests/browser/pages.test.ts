@@ -1,0 +1,72 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { openAccountMenu, signInWithForm, signOut } from './support/actions';
+import { startBrowserApp, type BrowserApp } from './support/browserApp';
+import { heading, launchBrowser, openPage, screenshot, visible, WIDTHS, type Browser } from './support/browser';
+
+describe.each(WIDTHS)('the remaining pages at %i px wide', (width) => {
+  let t: BrowserApp;
+  let browser: Browser;
+  beforeAll(async () => {
+    t = await startBrowserApp();
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+    await t?.close();
+  });
+
+  it('creates a new nursery, whose time zone defaults to the browser zone, and signs its owner in', async () => {
+    const { page, problems } = await openPage(browser, width);
+    await page.goto(`${t.origin}/sign-in`);
+    await page.getByRole('link', { name: 'Create an account' }).click();
+    await visible(heading(page, 'Create a nursery'));
+    // The browser runs in Asia/Tokyo (see launchBrowser).
+    expect(await page.getByLabel('Time zone').inputValue()).toBe('Asia/Tokyo');
+    await page.getByLabel('Time zone').fill('Atlantis/Lost');
+    await page.getByRole('button', { name: 'Create nursery' }).click();
+    await visible(page.getByText('Not a known IANA time zone'));
+    await page.getByLabel('Time zone').fill('Europe/Berlin');
+    await page.getByLabel('Nursery name').fill(`Quillmere Grafts ${width}`);
+    await page.getByLabel('Your name').fill('Odile Brant');
+    await page.getByLabel('E-mail').fill(`odile.${width}@example.com`);
+    await page.getByLabel('Password', { exact: true }).fill('long enough passphrase');
+    await screenshot(page, 'sign-up');
+    await page.getByRole('button', { name: 'Create nursery' }).click();
+    await visible(heading(page, 'Rooms'));
+    await visible(page.getByText('No rooms yet'));
+    await visible(page.getByRole('banner').getByText(`Quillmere Grafts ${width}`, { exact: true }));
+    await screenshot(page, 'rooms-empty');
+    await signOut(page);
+    expect(problems).toEqual([]);
+    await page.close();
+  });
+
+  it('switches the temperature unit, changes the password and shows a 404 inside the frame', async () => {
+    const { page, problems } = await openPage(browser, width);
+    await signInWithForm(page, t.origin, 'staff@example.com');
+    await openAccountMenu(page);
+    await page.getByRole('radio', { name: '°F' }).check();
+    await page.getByRole('link', { name: 'Change password' }).click();
+    await visible(heading(page, 'Your account'));
+    expect(await page.getByRole('radio', { name: '°F' }).isChecked()).toBe(true);
+    await page.getByLabel('Current password').fill('coldknit-demo');
+    await page.getByLabel('New password').fill('frost on the cellar door');
+    await screenshot(page, 'account');
+    await page.getByRole('button', { name: 'Change password' }).click();
+    await visible(page.getByText('Password changed.'));
+
+    await page.goto(`${t.origin}/nowhere/at/all`);
+    await visible(heading(page, 'No such page'));
+    await screenshot(page, 'not-found');
+    await page.goto(`${t.origin}/rooms/abc`);
+    await visible(heading(page, 'No such room'));
+
+    await signOut(page);
+    await signInWithForm(page, t.origin, 'staff@example.com', 'frost on the cellar door');
+    await openAccountMenu(page);
+    // The unit is stored with the person, so it survives signing out and in.
+    expect(await page.getByRole('radio', { name: '°F' }).isChecked()).toBe(true);
+    expect(problems).toEqual([]);
+    await page.close();
+  });
+});

@@ -1,0 +1,90 @@
+import { mkdir, mkdtemp, rm } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { chromium, type BrowserContext, type ConsoleMessage, type Locator, type Page } from 'playwright-core';
+
+const SCREENSHOT_DIR = join(import.meta.dirname, '..', '..', '..', '.test-output', 'screenshots');
+
+export const WIDTHS = [360, 1280] as const;
+
+export interface Browser {
+  context: BrowserContext;
+  close(): Promise<void>;
+}
+
+/**
+ * Debian's chromium through playwright-core, as /work/shared/STACK.md "Browser tests" describes. The browser's own
+ * zone is set far from the demo nursery's so that a page showing browser-local time instead of nursery time is caught.
+ */
+export async function launchBrowser(): Promise<Browser> {
+  const profile = await mkdtemp(join(tmpdir(), 'ck-chromium-'));
+  const context = await chromium.launchPersistentContext(profile, {
+    executablePath: '/usr/bin/chromium',
+    headless: true,
+    timezoneId: 'Asia/Tokyo',
+    locale: 'en-GB',
+    args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+  });
+  return {
+    context,
+    async close() {
+      await context.close();
+      await rm(profile, { recursive: true, force: true });
+    },
+  };
+}
+
+/**
+ * Signed out, the app asks /api/auth/me and gets 401 by design; Chromium logs every 4xx resource as a console error.
+ * Those and the statuses a test provokes on purpose are the only console errors tolerated.
+ */
+export interface ExpectedFailure {
+  status: number;
+  path: string;
+}
+const SIGNED_OUT_CHECK: ExpectedFailure = { status: 401, path: '/api/auth/me' };
+
+function isExpected(msg: ConsoleMessage, expected: ExpectedFailure[]): boolean {
+  const url = msg.location().url;
+  return expected.some((e) => msg.text().includes(`status of ${e.status}`) && new URL(url || 'about:blank', 'http://x').pathname === e.path);
+}
+
+export interface WatchedPage {
+  page: Page;
+  /** Console errors and uncaught page errors seen so far, beyond the expected ones. */
+  problems: string[];
+  /** Tolerate one more provoked failure, e.g. a 409 the test causes to check its message. */
+  expect(failure: ExpectedFailure): void;
+}
+
+/** A fresh tab, signed out: the persistent profile keeps cookies between tests, so they are cleared first. */
+export async function openPage(browser: Browser, width: number): Promise<WatchedPage> {
+  await browser.context.clearCookies();
+  const page = await browser.context.newPage();
+  await page.setViewportSize({ width, height: width < 700 ? 760 : 900 });
+  page.setDefaultTimeout(15_000);
+  const expected = [SIGNED_OUT_CHECK];
+  const problems: string[] = [];
+  page.on('console', (msg) => {
+    if (msg.type() === 'error' && !isExpected(msg, expected)) problems.push(`console: ${msg.text()} (${msg.location().url})`);
+  });
+  page.on('pageerror', (err) => problems.push(`page error: ${err.message}`));
+  return { page, problems, expect: (failure) => expected.push(failure) };
+}
+
+export async function screenshot(page: Page, name: string): Promise<void> {
+  await mkdir(SCREENSHOT_DIR, { recursive: true });
+  const width = page.viewportSize()?.width ?? 0;
+  // Fonts are bundled and load from the same server; wait for them so the picture shows the real type.
+  await page.evaluate(() => document.fonts.ready);
+  await page.screenshot({ path: join(SCREENSHOT_DIR, `${name}-${width}.png`), fullPage: true });
+}
+
+/** Waits until the locator is visible; playwright-core has no expect(), and a timeout here names what was missing. */
+export async function visible(locator: Locator): Promise<Locator> {
+  await locator.waitFor({ state: 'visible' });
+  return locator;
+}
+
+export const heading = (page: Page, name: string | RegExp) => page.getByRole('heading', { level: 1, name });
+export const sectionNav = (page: Page) => page.getByRole('navigation', { name: 'Sections' });

@@ -1,0 +1,54 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { signInWithForm } from './support/actions';
+import { startBrowserApp, type BrowserApp } from './support/browserApp';
+import { heading, launchBrowser, openPage, screenshot, sectionNav, visible, WIDTHS, type Browser } from './support/browser';
+
+/** Labels of every control that changes data; a viewer must meet none of them (the server refuses them anyway). */
+const WRITE_CONTROLS = /^(Add room|Add logger|Add a logger here|Edit|Delete|Record move|Send invitation|Create token|Save nursery|Remove|Revoke)$/;
+
+describe.each(WIDTHS)('a viewer at %i px wide', (width) => {
+  let t: BrowserApp;
+  let browser: Browser;
+  beforeAll(async () => {
+    t = await startBrowserApp();
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+    await t?.close();
+  });
+
+  it('reads rooms, loggers and settings without meeting a single write control', async () => {
+    const { page, problems } = await openPage(browser, width);
+    await signInWithForm(page, t.origin, 'viewer@example.com');
+    const writeControls = () => page.getByRole('main').getByRole('link').or(page.getByRole('main').getByRole('button')).filter({ hasText: WRITE_CONTROLS });
+
+    await visible(page.getByRole('link', { name: 'North garage' }));
+    expect(await writeControls().count()).toBe(0);
+
+    await page.getByRole('link', { name: 'North garage' }).click();
+    await visible(heading(page, 'North garage'));
+    await visible(page.getByRole('link', { name: 'K-02' }));
+    expect(await writeControls().count()).toBe(0);
+    await screenshot(page, 'viewer-room-detail');
+
+    await page.getByRole('link', { name: 'K-02' }).click();
+    await visible(heading(page, 'K-02'));
+    await visible(page.getByRole('heading', { name: 'Placement history' }));
+    expect(await page.getByRole('heading', { name: 'Move' }).count()).toBe(0);
+    expect(await writeControls().count()).toBe(0);
+    await screenshot(page, 'viewer-logger-detail');
+
+    await sectionNav(page).getByRole('link', { name: 'Loggers' }).click();
+    await visible(page.getByRole('link', { name: 'K-05' }));
+    expect(await writeControls().count()).toBe(0);
+
+    await sectionNav(page).getByRole('link', { name: 'Settings' }).click();
+    await visible(page.getByText('America/Chicago'));
+    expect(await page.getByRole('textbox').count()).toBe(0);
+    expect(await writeControls().count()).toBe(0);
+    await screenshot(page, 'viewer-settings');
+    expect(problems).toEqual([]);
+    await page.close();
+  });
+});
