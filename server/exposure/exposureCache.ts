@@ -1,0 +1,81 @@
+// The batch_exposure_cache table: computed figures per batch, valid while the stamp of their inputs is unchanged.
+import { createHash } from 'node:crypto';
+import type { Pool } from 'mariadb';
+import { sqlInstant } from '../readings/readingStore';
+import type { BatchFigures } from './batchFigures';
+import type { BatchRecord, ExposureInputs } from './exposureInputs';
+
+/** Bump when the computation or the stored shape changes, so rows written by older code are recomputed. */
+const CACHE_FORMAT = 1;
+
+/**
+ * Digest of every input but the readings themselves: the profile's numbers, the batch's placements, and for each
+ * of its rooms the loggers' stays there with each logger's latest completed import id. A new import (the importer's,
+ * the demo top-up's) raises that id, so the importer needs to call nothing: the next read finds the stamp changed.
+ */
+export function stampOf(batch: BatchRecord, inputs: ExposureInputs): string {
+  const profile = inputs.profiles.get(batch.speciesKey);
+  const rooms = [...new Set(batch.placements.map((p) => p.roomId))].sort((a, b) => a - b);
+  const watched = rooms.map((roomId) => [
+    roomId,
+    (inputs.staysByRoom.get(roomId) ?? []).map((s) => [s.loggerId, s.from, s.to, inputs.generations.get(s.loggerId) ?? 0]),
+  ]);
+  const numbers = profile ? [profile.freezeC, profile.band, profile.callus] : null;
+  const placements = batch.placements.map((p) => [p.id, p.roomId, p.from, p.to]);
+  return createHash('sha1').update(JSON.stringify([CACHE_FORMAT, batch.speciesKey, numbers, placements, watched])).digest('hex');
+}
+
+export interface CachedFigures {
+  stamp: string;
+  /** Epoch ms after which the row must be recomputed; null for never. */
+  validUntil: number | null;
+  figures: BatchFigures;
+}
+
+export type CacheView = 'summary' | 'detail';
+
+/** Cached rows of the nursery (or of one batch): `summary` for the nursery table, `detail` for a batch page. */
+export async function readCache(pool: Pool, nurseryId: number, view: CacheView, batchId?: number): Promise<Map<number, CachedFigures>> {
+  const column = view === 'summary' ? 'summary' : 'detail';
+  const rows = (await pool.query(
+    {
+      sql: `SELECT batch_id, stamp, CAST(UNIX_TIMESTAMP(valid_until) * 1000 AS SIGNED), ${column}
+              FROM batch_exposure_cache WHERE nursery_id = ?${batchId === undefined ? '' : ' AND batch_id = ?'}`,
+      rowsAsArray: true,
+    },
+    batchId === undefined ? [nurseryId] : [nurseryId, batchId],
+  )) as [number, string, number | null, string][];
+  return new Map(rows.map(([id, stamp, validUntil, json]) => [id, { stamp, validUntil, figures: JSON.parse(json) as BatchFigures }]));
+}
+
+/** Whether a cached row still answers for the batch at `now`. */
+export const isFresh = (cached: CachedFigures | undefined, stamp: string, now: number): cached is CachedFigures =>
+  cached !== undefined && cached.stamp === stamp && (cached.validUntil === null || now < cached.validUntil);
+
+export interface CacheEntry {
+  batchId: number;
+  stamp: string;
+  validUntil: number | null;
+  figures: BatchFigures;
+}
+
+/** The table view keeps the headline only; the detail keeps every placement and logger. */
+const summaryOf = (figures: BatchFigures): BatchFigures => ({ ...figures, placements: [] });
+
+export async function writeCache(pool: Pool, nurseryId: number, entries: CacheEntry[]): Promise<void> {
+  if (entries.length === 0) return;
+  await pool.batch(
+    `INSERT INTO batch_exposure_cache (batch_id, nursery_id, stamp, computed_at, valid_until, summary, detail) VALUES (?, ?, ?, ?, ?, ?, ?)
+     ON DUPLICATE KEY UPDATE stamp = VALUES(stamp), computed_at = VALUES(computed_at), valid_until = VALUES(valid_until),
+                             summary = VALUES(summary), detail = VALUES(detail)`,
+    entries.map((e) => [
+      e.batchId,
+      nurseryId,
+      e.stamp,
+      sqlInstant(e.figures.computedAt),
+      e.validUntil === null ? null : sqlInstant(e.validUntil),
+      JSON.stringify(summaryOf(e.figures)),
+      JSON.stringify(e.figures),
+    ]),
+  );
+}
