@@ -32,7 +32,7 @@ export function unitInText(text: string): TemperatureUnit | 'both' | null {
 const TEMPERATURE_WORD = /temp|température|temperatur|\btmp\b|^t\s*(?:$|[(\[_])|celsius|fahrenheit|°\s*[cf]|\bdeg\s*[cf]\b|\bdeg[cf]\b/;
 const NOT_ROOM_TEMPERATURE = /dew|set\s*-?point|alarm|limit|threshold|battery|volt|signal|rssi|heat\s*index|wet\s*bulb/;
 const HUMIDITY_WORD = /\brh\b|%\s*rh|humid|feuchte|\bhr\b|\bhum\b|moisture/;
-const INDEX_WORD = /^(?:#|no\.?|nr\.?|n°|num(?:ber)?|index|idx|id|record|rec|row|sample|point|reading|seq(?:uence)?)(?:\s*#|\s*no\.?)?$/;
+const INDEX_WORD = /^(?:#|no\.?|nr\.?|n°|num(?:ber)?|index|idx|id|record|rec|row|seq(?:uence)?)(?:\s*#|\s*no\.?)?$/;
 const TIME_WORD = /time|date|datum|zeit|stamp|epoch|unix|when|heure|fecha/;
 
 export function namesTemperature(name: string): boolean {

@@ -125,8 +125,9 @@ class IanaResolver implements LocalTimeResolver {
     const earlier = localMs - Math.max(...valid) * MINUTE;
     const later = localMs - Math.min(...valid) * MINUTE;
     if (previousUtc === null) return this.descending ? later : earlier;
-    if (this.descending) return later <= previousUtc ? later : earlier;
-    return earlier >= previousUtc ? earlier : later;
+    // The same local time again right after itself means the clocks went back in between.
+    if (this.descending) return later < previousUtc ? later : earlier;
+    return earlier > previousUtc ? earlier : later;
   }
 
   private offsetAt(utcMs: number): number {

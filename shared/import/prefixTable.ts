@@ -89,15 +89,41 @@ function mode(values: number[]): number {
   return best;
 }
 
-export function splitLine(line: string, delimiter: Delimiter): string[] {
+/**
+ * The prefix as CSV records (RFC 4180: a quoted field may span lines), each with the line it starts on.
+ * Null when the quoting is broken somewhere, e.g. a stray quote in a preamble line.
+ */
+function wholeRecords(lines: string[], delimiter: Delimiter): PrefixRow[] | null {
   try {
-    const records = parse(line, { delimiter, relax_quotes: true, relax_column_count: true, ltrim: true, rtrim: true }) as string[][];
-    return records[0] ?? [''];
+    const records = parse(lines.join('\n'), { ...SPLIT_OPTIONS, delimiter, record_delimiter: '\n', info: true }) as unknown as {
+      record: string[];
+      info: { lines: number };
+    }[];
+    return records
+      // info.lines is the line a record ends on; a record spanning k lines started k − 1 lines earlier.
+      .map(({ record, info }) => ({ index: info.lines - record.join('').split('\n').length, fields: record }))
+      .filter((row) => row.fields.some((field) => field.trim() !== ''));
   } catch {
-    // A preamble line with stray quotes: keep it whole, it is not data anyway.
-    return [line];
+    return null;
   }
 }
+
+/** Line by line, keeping a line whose quotes do not parse as one field (it is not data anyway). */
+function lineByLine(lines: string[], delimiter: Delimiter): PrefixRow[] {
+  const rows: PrefixRow[] = [];
+  lines.forEach((line, index) => {
+    if (line.trim() === '') return;
+    try {
+      const [fields] = parse(line, { ...SPLIT_OPTIONS, delimiter }) as string[][];
+      rows.push({ index, fields: fields ?? [line] });
+    } catch {
+      rows.push({ index, fields: [line] });
+    }
+  });
+  return rows;
+}
+
+const SPLIT_OPTIONS = { relax_quotes: true, relax_column_count: true, ltrim: true, rtrim: true } as const;
 
 /** A row is shaped like a reading when some cell holds a date-time, a Unix time, or a date beside a time. */
 export function isDataShaped(fields: string[]): boolean {
@@ -124,10 +150,7 @@ const UNITS_ROW_CELL = /^(?:[°º]?\s*[cf]|deg\s*[cf]|%\s*(?:rh)?|rh|[℃℉]|\(
 
 export function readPrefixTable(lines: string[], lineEnding: PrefixTable['lineEnding']): PrefixTable {
   const delimiter = detectDelimiter(lines);
-  const rows: PrefixRow[] = [];
-  lines.forEach((line, index) => {
-    if (line.trim() !== '') rows.push({ index, fields: splitLine(line, delimiter) });
-  });
+  const rows = wholeRecords(lines, delimiter) ?? lineByLine(lines, delimiter);
   const usualCount = mode(rows.slice(-10).map((row) => row.fields.length));
   // The first row that is surely a reading: usual width, a timestamp, and a number beside it.
   // ("Exported;2024-01-08 09:12" in a preamble has a timestamp but no reading.)
@@ -137,7 +160,9 @@ export function readPrefixTable(lines: string[], lineEnding: PrefixTable['lineEn
     (row: PrefixRow) => row.fields.length === usualCount && isDataShaped(row.fields),
     (row: PrefixRow) => isDataShaped(row.fields),
   ];
-  const firstData = tests.map((test) => rows.findIndex(test)).find((index) => index !== -1) ?? -1;
+  let firstData = tests.map((test) => rows.findIndex(test)).find((index) => index !== -1) ?? -1;
+  // Rows of the same shape just above it are readings too, e.g. a run of "ERR" rows at the start.
+  while (firstData > 0 && tests[1](rows[firstData - 1])) firstData--;
   if (firstData === -1) {
     const hasTableLines = rows.some((row) => row.fields.length >= 2);
     throw new ImportError(

@@ -8,7 +8,7 @@ import { inspectPrefix, writtenDates, type PrefixFindings } from './inspectPrefi
 import { createLocalTimeResolver } from './localTime';
 import { streamRecords, type RecordStreamOptions } from './recordStream';
 import { RowAccountant } from './rowAccountant';
-import type { DateOrder, DateOrderSource, OnBatch, ReadOptions, ReadSummary } from './types';
+import type { DateOrder, DateOrderSource, Detection, OnBatch, ReadOptions, ReadSummary } from './types';
 
 export type { ByteSourceFactory } from './byteSource';
 
@@ -25,7 +25,12 @@ const PREFIX_BYTES = 64 * 1024;
  * Throws ImportError when the file as a whole cannot be read; batches already handed on before such an
  * error (only 'mixed_units' can come that late) belong to a file the caller should discard.
  */
-export async function readLoggerFile(source: ByteSourceFactory, options: ReadOptions, onBatch: OnBatch): Promise<ReadSummary> {
+export interface ReadHooks {
+  /** Called once the layout is known and before any batch: the importer picks the logger and opens its transaction here. */
+  onDetected?: (detected: Detection) => Promise<void>;
+}
+
+export async function readLoggerFile(source: ByteSourceFactory, options: ReadOptions, onBatch: OnBatch, hooks: ReadHooks = {}): Promise<ReadSummary> {
   checkOptions(options);
   const maxLineBytes = options.maxLineBytes ?? DEFAULT_MAX_LINE_BYTES;
   const batchSize = options.batchSize ?? DEFAULT_BATCH_SIZE;
@@ -47,6 +52,8 @@ export async function readLoggerFile(source: ByteSourceFactory, options: ReadOpt
   const optionZone = options.tz ? createLocalTimeResolver(options.tz, direction) : null;
   const localTime = stamp.kind === 'epoch' ? null : (optionZone ?? createLocalTimeResolver(options.defaultZone, direction));
   const zone = chooseZone(findings, optionZone?.zoneName ?? null, localTime?.zoneName ?? 'UTC');
+  const detected = buildDetection(findings, dateOrder, zone, direction);
+  await hooks.onDetected?.(detected);
 
   const roles = findings.roles;
   const timeColumns = stamp.kind === 'date+time' ? [stamp.dateColumn, stamp.timeColumn] : [stamp.column];
@@ -82,7 +89,7 @@ export async function readLoggerFile(source: ByteSourceFactory, options: ReadOpt
     );
   }
   return {
-    detected: buildDetection(findings, dateOrder, zone, direction),
+    detected,
     rows: { ...counts },
     rejectedLines: accountant.rejectedLines,
     conflictLines: accountant.conflictLines,
