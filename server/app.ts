@@ -7,13 +7,16 @@ import type { Pool } from 'mariadb';
 import type { Sequelize } from 'sequelize';
 import { authenticate } from './auth/authenticate';
 import { authRoutes } from './auth/auth.routes';
+import { batchRoutes } from './batches/batches.routes';
 import type { AppConfig } from './config';
+import { exposureRoutes } from './exposure/exposure.routes';
 import { ApiError, errorHandler } from './http/errors';
 import { originGuard } from './http/originGuard';
 import { mountRoutes, type RouteInfo } from './http/route';
 import { loggerRoutes } from './loggers/loggers.routes';
 import type { Mailer } from './mail/mailer';
 import { nurseryRoutes } from './nurseries/nurseries.routes';
+import { profileRoutes } from './profiles/profiles.routes';
 import { roomRoutes } from './rooms/rooms.routes';
 import { systemRoutes } from './system/system.routes';
 import { tokenRoutes } from './tokens/tokens.routes';
@@ -51,6 +54,9 @@ export function createApp(deps: AppDeps): { app: Express; routes: RouteInfo[] } 
     ...tokenRoutes(),
     ...roomRoutes(),
     ...loggerRoutes(sequelize),
+    ...profileRoutes(),
+    ...batchRoutes(sequelize),
+    ...exposureRoutes(deps.pool),
   ]);
   app.use('/api', originGuard(config.appOrigin), authenticate(config.jwtSecret), router);
   app.use('/api', (_req, _res, next) => next(new ApiError(404, 'no_such_route', 'There is no such API route.')));

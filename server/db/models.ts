@@ -7,6 +7,9 @@ import { Logger } from '../loggers/logger.model';
 import { LoggerPlacement } from '../loggers/loggerPlacement.model';
 import { ApiToken } from '../tokens/apiToken.model';
 import { Import } from '../imports/import.model';
+import { NurseryProfile } from '../profiles/nurseryProfile.model';
+import { Batch } from '../batches/batch.model';
+import { BatchPlacement } from '../batches/batchPlacement.model';
 
 /** Binds every model to this Sequelize and declares the associations once. */
 export function initModels(sequelize: Sequelize): void {
@@ -15,4 +18,7 @@ export function initModels(sequelize: Sequelize): void {
   LoggerPlacement.belongsTo(Logger, { foreignKey: 'loggerId', as: 'logger' });
   LoggerPlacement.belongsTo(Room, { foreignKey: 'roomId', as: 'room' });
   Room.hasMany(LoggerPlacement, { foreignKey: 'roomId', as: 'loggerPlacements' });
+  for (const model of [NurseryProfile, Batch, BatchPlacement]) model.initModel(sequelize);
+  Batch.hasMany(BatchPlacement, { foreignKey: 'batchId', as: 'placements' });
+  BatchPlacement.belongsTo(Batch, { foreignKey: 'batchId', as: 'batch' });
 }

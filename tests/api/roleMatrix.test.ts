@@ -20,6 +20,12 @@ let seq = 0;
 const unique = (prefix: string) => `${prefix}-${Date.now()}-${++seq}`;
 const firstId = async (owner: Agent, path: string) => (await owner.get(path)).body[0].id as number;
 const newRoom = async (owner: Agent) => (await owner.post('/api/rooms').send({ name: unique('room'), kind: 'other' })).body.id as number;
+const batchBody = async (owner: Agent) => ({
+  species: 'apple', scionCultivar: 'Matrix', rootstock: 'M.111', method: 'cleft', count: 5, roomId: await newRoom(owner),
+  graftedOn: new Date(Date.now() - 86_400_000).toISOString().slice(0, 10), placedAt: new Date(Date.now() - 3_600_000).toISOString(),
+});
+const newBatch = async (owner: Agent) => (await owner.post('/api/batches').send(await batchBody(owner))).body.id as number;
+const newProfile = async (owner: Agent) => (await owner.post('/api/profiles').send({ from: 'pear', key: unique('p'), name: 'Matrix pear' })).body.key as string;
 
 const CASES: Record<string, Case> = {
   'GET /api/health': { prepare: async () => ({ path: '/api/health' }), ok: 200 },
@@ -72,6 +78,26 @@ const CASES: Record<string, Case> = {
     },
     ok: 200,
   },
+  'GET /api/profiles': { prepare: async () => ({ path: '/api/profiles' }), ok: 200 },
+  'POST /api/profiles': { prepare: async () => ({ path: '/api/profiles', body: { from: 'apple', key: unique('copy'), name: 'Matrix apple' } }), ok: 201 },
+  'PATCH /api/profiles/:key': { prepare: async (o) => ({ path: `/api/profiles/${await newProfile(o)}`, body: { freezeC: -3 } }), ok: 200 },
+  'DELETE /api/profiles/:key': { prepare: async (o) => ({ path: `/api/profiles/${await newProfile(o)}` }), ok: 204 },
+  'GET /api/batches': { prepare: async () => ({ path: '/api/batches' }), ok: 200 },
+  'GET /api/batches/:id': { prepare: async (o) => ({ path: `/api/batches/${await newBatch(o)}` }), ok: 200 },
+  'POST /api/batches': { prepare: async (o) => ({ path: '/api/batches', body: await batchBody(o) }), ok: 201 },
+  'POST /api/batches/bulk': {
+    prepare: async (o) => {
+      const { roomId, graftedOn, ...row } = await batchBody(o);
+      return { path: '/api/batches/bulk', body: { roomId, graftedOn, rows: [row, row] } };
+    },
+    ok: 201,
+  },
+  'PATCH /api/batches/:id': { prepare: async (o) => ({ path: `/api/batches/${await newBatch(o)}`, body: { notes: 'heeled in' } }), ok: 200 },
+  'POST /api/batches/:id/move': { prepare: async (o) => ({ path: `/api/batches/${await newBatch(o)}/move`, body: { roomId: await newRoom(o) } }), ok: 200 },
+  'POST /api/batches/:id/discard': { prepare: async (o) => ({ path: `/api/batches/${await newBatch(o)}/discard`, body: {} }), ok: 200 },
+  'POST /api/batches/:id/plant-out': { prepare: async (o) => ({ path: `/api/batches/${await newBatch(o)}/plant-out`, body: {} }), ok: 200 },
+  'GET /api/batches/:id/exposure': { prepare: async (o) => ({ path: `/api/batches/${await newBatch(o)}/exposure` }), ok: 200 },
+  'GET /api/exposure/batches': { prepare: async () => ({ path: '/api/exposure/batches' }), ok: 200 },
 };
 
 const SESSION_CHANGING = new Set(['/api/auth/login', '/api/auth/logout', '/api/auth/signup']);

@@ -2,6 +2,7 @@ import type { QueryInterface } from 'sequelize';
 import * as foundation from './001-foundation';
 import * as apiTokens from './002-api-tokens';
 import * as readingsImports from './003-readings-imports';
+import * as batchesProfiles from './004-batches-profiles';
 
 export interface Migration {
   name: string;
@@ -14,4 +15,5 @@ export const migrations: Migration[] = [
   { name: '001-foundation', ...foundation },
   { name: '002-api-tokens', ...apiTokens },
   { name: '003-readings-imports', ...readingsImports },
+  { name: '004-batches-profiles', ...batchesProfiles },
 ];
