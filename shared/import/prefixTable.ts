@@ -164,11 +164,11 @@ export function readPrefixTable(lines: string[], lineEnding: PrefixTable['lineEn
   // Rows of the same shape just above it are readings too, e.g. a run of "ERR" rows at the start.
   while (firstData > 0 && tests[1](rows[firstData - 1])) firstData--;
   if (firstData === -1) {
-    const hasTableLines = rows.some((row) => row.fields.length >= 2);
+    const headerOnly = rows.filter((row) => row.fields.length >= 2).length <= 1;
     throw new ImportError(
-      hasTableLines ? 'no_data' : 'no_timestamp',
-      hasTableLines
-        ? 'The file has a header but no rows with a date and time. Check that the export contains readings.'
+      headerOnly ? 'no_data' : 'no_timestamp',
+      headerOnly
+        ? 'The file has a header but no readings below it. Check that the export contains readings.'
         : 'No line holds a date and time the reader understands. Timestamps may be ISO 8601, day/month/year or month/day/year dates with a time, separate date and time columns, or Unix seconds.',
     );
   }

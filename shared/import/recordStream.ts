@@ -73,31 +73,32 @@ export async function streamRecords(source: ByteSourceFactory, options: RecordSt
   try {
     for await (const chunk of readSource(source)) {
       await write(skipper.pass(decoder.write(chunk)));
-      throwIfFailed(parserFailure, handlerFailure, line, options.maxLineBytes);
+      throwIfFailed(parserFailure, handlerFailure, line, options);
       await handlers.afterChunk?.();
       if (handlers.isDone?.()) return;
     }
     await write(skipper.pass(decoder.end()));
     parser.end();
     await ended;
-    throwIfFailed(parserFailure, handlerFailure, line, options.maxLineBytes);
+    throwIfFailed(parserFailure, handlerFailure, line, options);
     await handlers.afterChunk?.();
   } finally {
     parser.destroy();
   }
 }
 
-function throwIfFailed(parserFailure: unknown, handlerFailure: unknown, line: number, maxLineBytes: number): void {
+function throwIfFailed(parserFailure: unknown, handlerFailure: unknown, line: number, { maxLineBytes, skipLines }: RecordStreamOptions): void {
   if (handlerFailure !== null) throw handlerFailure;
   if (parserFailure === null) return;
   if (parserFailure instanceof CsvError) {
     // CsvError carries the parser's position (csv-parse copies its info onto the error).
     const reported = (parserFailure as CsvError & { lines?: number }).lines;
-    const at = typeof reported === 'number' ? reported : line;
+    // csv-parse counts from the first line it was given, after the skipped preamble and header.
+    const at = typeof reported === 'number' ? reported + skipLines : line;
     if (parserFailure.code === 'CSV_MAX_RECORD_SIZE') throw lineTooLong(at, maxLineBytes);
     throw new ImportError(
       'malformed_csv',
-      `Line ${at}: the CSV quoting is broken (${parserFailure.message.replace(/^[^:]*:\s*/, '')}). Fix the quotes on that line and try again.`,
+      `Line ${at}: the CSV quoting is broken (${parserFailure.message.replace(/^[^:]*:\s*/, '').replace(/\s*at line \d+/, '')}). Fix the quotes on that line and try again.`,
       { cause: parserFailure },
     );
   }
