@@ -51,8 +51,8 @@ export function detectDelimiter(lines: string[]): Delimiter {
   const nonBlank = lines.filter((line) => line.trim() !== '');
   for (const delimiter of CANDIDATES) {
     const counts = nonBlank.map((line) => countFields(line, delimiter));
-    const tail = counts.slice(-10);
-    const usual = mode(tail);
+    // The usual width of the last lines that split at all: short files may have more preamble than rows.
+    const usual = mode(counts.slice(-10).filter((count) => count >= 2));
     if (usual < 2) continue;
     const start = counts.indexOf(usual);
     const block = counts.slice(start);
@@ -151,7 +151,7 @@ const UNITS_ROW_CELL = /^(?:[°º]?\s*[cf]|deg\s*[cf]|%\s*(?:rh)?|rh|[℃℉]|\(
 export function readPrefixTable(lines: string[], lineEnding: PrefixTable['lineEnding']): PrefixTable {
   const delimiter = detectDelimiter(lines);
   const rows = wholeRecords(lines, delimiter) ?? lineByLine(lines, delimiter);
-  const usualCount = mode(rows.slice(-10).map((row) => row.fields.length));
+  const usualCount = mode(rows.slice(-10).map((row) => row.fields.length).filter((count) => count >= 2));
   // The first row that is surely a reading: usual width, a timestamp, and a number beside it.
   // ("Exported;2024-01-08 09:12" in a preamble has a timestamp but no reading.)
   // A file where every reading is a fault code still has its rows found, by the weaker tests.
