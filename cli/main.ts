@@ -1,13 +1,15 @@
 import { Command, CommanderError } from 'commander';
 import { isImportError } from '../shared/import/importError';
 import { checkCommand } from './commands/check';
+import { importCommand } from './commands/import';
+import { loginCommand } from './commands/login';
 import { CliError } from './output/cliError';
 import { EXIT } from './output/exitCodes';
 import { exitCodeForImportError } from './output/importErrors';
 import { printError } from './output/streams';
 
 /** Adding a command: one file under commands/ exporting a Command, and one line here. */
-const COMMANDS: (() => Command)[] = [checkCommand];
+const COMMANDS: (() => Command)[] = [checkCommand, importCommand, loginCommand];
 
 function buildProgram(): Command {
   const program = new Command('coldknit')

@@ -13,6 +13,7 @@ import { exposureRoutes } from './exposure/exposure.routes';
 import { ApiError, errorHandler } from './http/errors';
 import { originGuard } from './http/originGuard';
 import { mountRoutes, type RouteInfo } from './http/route';
+import { importRoutes } from './imports/imports.routes';
 import { loggerRoutes } from './loggers/loggers.routes';
 import type { Mailer } from './mail/mailer';
 import { nurseryRoutes } from './nurseries/nurseries.routes';
@@ -54,6 +55,7 @@ export function createApp(deps: AppDeps): { app: Express; routes: RouteInfo[] } 
     ...tokenRoutes(),
     ...roomRoutes(),
     ...loggerRoutes(sequelize),
+    ...importRoutes(deps.pool),
     ...profileRoutes(),
     ...batchRoutes(sequelize),
     ...exposureRoutes(deps.pool),

@@ -19,7 +19,7 @@ export interface BatchOutcome {
  * A stored reading with another value is a conflict: reported, never overwritten. The caller holds the logger's
  * import lock, so no other import can slip a reading in between the SELECT and the INSERT.
  */
-export async function storeBatch(conn: PoolConnection, loggerId: number, importId: number, batch: Reading[]): Promise<BatchOutcome> {
+export async function storeBatch(conn: PoolConnection, loggerId: number, importId: number | null, batch: Reading[]): Promise<BatchOutcome> {
   let lo = Infinity;
   let hi = -Infinity;
   for (const r of batch) {
@@ -43,6 +43,7 @@ export async function storeBatch(conn: PoolConnection, loggerId: number, importI
     else if (stored === c) alreadyStored++;
     else conflicts.push({ line: r.line, reason: `already stored with ${stored} °C at this time; the file says ${c} °C (kept the stored value)` });
   }
-  if (fresh.length) await conn.batch('INSERT INTO readings (logger_id, t, c, rh, import_id) VALUES (?, ?, ?, ?, ?)', fresh);
+  // Without an import record (a dry run) the comparison is all that is wanted.
+  if (fresh.length && importId !== null) await conn.batch('INSERT INTO readings (logger_id, t, c, rh, import_id) VALUES (?, ?, ?, ?, ?)', fresh);
   return { stored: fresh.length, alreadyStored, conflicts };
 }

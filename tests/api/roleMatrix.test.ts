@@ -12,9 +12,12 @@ type Agent = TestAgent | ReturnType<typeof request.agent>;
  * when the role may use it. Roles below the route's access get 403; anonymous callers 401 unless it is public.
  */
 interface Case {
-  prepare(owner: Agent): Promise<{ path: string; body?: unknown }>;
+  prepare(owner: Agent): Promise<{ path: string; body?: unknown; file?: { name: string; content: string } }>;
   ok: number;
 }
+
+/** A small, valid logger file for the upload route; the dry run keeps the matrix from storing readings. */
+const SMALL_FILE = { name: 'matrix.csv', content: 'time,temperature °C\n2026-11-20T06:00:00Z,3.5\n2026-11-20T06:10:00Z,3.4\n' };
 
 let seq = 0;
 const unique = (prefix: string) => `${prefix}-${Date.now()}-${++seq}`;
@@ -71,6 +74,9 @@ const CASES: Record<string, Case> = {
   'GET /api/loggers/:id': { prepare: async (o) => ({ path: `/api/loggers/${await firstId(o, '/api/loggers')}` }), ok: 200 },
   'POST /api/loggers': { prepare: async () => ({ path: '/api/loggers', body: { label: unique('L') } }), ok: 201 },
   'PATCH /api/loggers/:id': { prepare: async (o) => ({ path: `/api/loggers/${await firstId(o, '/api/loggers')}`, body: { notes: 'moved shelf' } }), ok: 200 },
+  'GET /api/imports': { prepare: async () => ({ path: '/api/imports' }), ok: 200 },
+  'GET /api/imports/:id': { prepare: async (o) => ({ path: `/api/imports/${await firstId(o, '/api/imports')}` }), ok: 200 },
+  'POST /api/imports': { prepare: async () => ({ path: '/api/imports', body: { logger: 'K-01', dryRun: 'true' }, file: SMALL_FILE }), ok: 200 },
   'POST /api/loggers/:id/move': {
     prepare: async (o) => {
       const logger = (await o.post('/api/loggers').send({ label: unique('M') })).body.id;
@@ -140,7 +146,7 @@ describe('role matrix: every route × every role', () => {
       for (const route of t.routes) {
         const key = `${route.method} ${route.path}`;
         const c = CASES[key];
-        const { path, body } = await c.prepare(agents.owner);
+        const { path, body, file } = await c.prepare(agents.owner);
         const status =
           route.access === 'public' ? c.ok
           : who === 'anonymous' ? 401
@@ -148,7 +154,10 @@ describe('role matrix: every route × every role', () => {
           : 403;
         // Routes that set or clear the session cookie get a fresh agent, so the role under test keeps its own session.
         const agent = SESSION_CHANGING.has(route.path) ? request.agent(t.app) : agents[who];
-        const res = await agent[route.method.toLowerCase() as 'get'](path).send(body as object);
+        const call = agent[route.method.toLowerCase() as 'get'](path);
+        const res = file
+          ? await Object.entries(body as Record<string, string>).reduce((r, [k, v]) => r.field(k, v), call).attach('file', Buffer.from(file.content), file.name)
+          : await call.send(body as object);
         results.push(`${key} → ${res.status}`);
         expected.push(`${key} → ${status}`);
       }
