@@ -2,8 +2,12 @@
 import { describeTake } from './formatTake';
 import type { TakeGroup } from './types';
 
-/** Groups with fewer grafts than this are shown in the tables but not singled out in the summary. */
+/**
+ * Groups smaller than this are shown in the tables but not singled out in the summary: a single batch is a single
+ * storage history, however many grafts it holds.
+ */
 export const MIN_GRAFTS_FOR_FINDING = 20;
+export const MIN_BATCHES_FOR_FINDING = 2;
 const MAX_FINDINGS = 4;
 
 export const ASSOCIATION_CAUTION =
@@ -30,7 +34,7 @@ interface DimensionGroups {
 }
 
 function compareWithin(d: DimensionGroups): Omit<Finding, 'text'> | null {
-  const named = d.groups.filter((g) => !g.catchAll && g.planted >= MIN_GRAFTS_FOR_FINDING);
+  const named = d.groups.filter((g) => !g.catchAll && g.planted >= MIN_GRAFTS_FOR_FINDING && g.batches >= MIN_BATCHES_FOR_FINDING);
   if (named.length < 2) return null;
   const higher = named.reduce((best, g) => (g.takePct > best.takePct ? g : best));
   const lower = named.reduce((worst, g) => (g.takePct < worst.takePct ? g : worst));
@@ -47,7 +51,7 @@ function sentence(f: Omit<Finding, 'text'>): string {
 }
 
 /**
- * For each grouping, its highest and lowest take among groups of at least MIN_GRAFTS_FOR_FINDING grafts.
+ * For each grouping, its highest and lowest take among groups large enough (see MIN_GRAFTS_FOR_FINDING).
  * Differences whose intervals do not overlap come first, widest gap first, at most MAX_FINDINGS of them;
  * when there is none, the one with the largest difference in take is given, marked as possibly chance.
  */

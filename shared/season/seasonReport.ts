@@ -70,13 +70,13 @@ function labelOrder(batches: readonly BatchOutcome[], groupOf: GroupOf): string[
 }
 
 function formatDegreeHours(value: number, unit: TemperatureUnit): string {
-  return `${value.toFixed(value < 10 ? 1 : 0)} °${unit}·h`;
+  return `${value === 0 ? '0' : value.toFixed(value < 10 ? 1 : 0)} °${unit}·h`;
 }
 
 function quartileLabels(cuts: [number, number, number], unit: TemperatureUnit): Record<string, string> {
   const [a, b, c] = cuts.map((v) => formatDegreeHours(v, unit));
   return {
-    q1: `Lowest quarter (up to ${a})`,
+    q1: cuts[0] === 0 ? 'Lowest quarter (none outside the band)' : `Lowest quarter (up to ${a})`,
     q2: `Second quarter (${a} to ${b})`,
     q3: `Third quarter (${b} to ${c})`,
     q4: `Highest quarter (over ${c})`,
@@ -132,7 +132,7 @@ export function buildSeasonReport(season: number, outcomes: readonly BatchOutcom
     ),
     dimension(
       'degreeHours', 'Degree-hours outside the band',
-      'Degree-hours below plus above the species\' storage band, per graft planted; quarters split this season\'s assessed batches (each batch counts once).',
+      'Degree-hours below plus above the species\' storage band, per graft planted. Quarters are cut at the quartiles of this season\'s assessed batches (each batch counts once); batches tied at a cut stay together, so quarters may hold unequal numbers of batches.',
       batches, quartileGroup, [...QUARTILE_KEYS, NOT_MEASURED.key],
     ),
     dimension('species', 'Species', AS_RECORDED, batches, byText((b) => b.species)),

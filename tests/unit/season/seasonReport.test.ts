@@ -3,6 +3,8 @@ import { compareSeasons } from '../../../shared/season/compareSeasons';
 import { ASSOCIATION_CAUTION, strongestDifferences } from '../../../shared/season/findings';
 import { describeTake } from '../../../shared/season/formatTake';
 import { buildSeasonReport } from '../../../shared/season/seasonReport';
+import { takeFigure } from '../../../shared/season/takeFigure';
+import type { TakeGroup } from '../../../shared/season/types';
 import { outcome, seasonFixture } from './fixtures';
 
 // Every expected figure below was worked out by hand from seasonFixture(): grafts grown ÷ grafts planted per
@@ -81,17 +83,26 @@ describe('buildSeasonReport on the hand-computed fixture', () => {
 
 describe('strongestDifferences', () => {
   // Wilson 95 % intervals (hand-computed): Cellar 130/150 80.30–91.20, Garage 50/100 40.38–59.62 → gap 20.69;
-  // Ana/Ben the same; M.26 130/150 vs M.9 30/60 (37.74–62.27) → 18.04; no freeze 90/100 (82.56–94.48) vs 1–6 h
-  // 20/40 (35.20–64.80) → 17.76; lowest vs third degree-hour quarter → 15.50. Species, cultivar and method overlap.
-  it('lists the differences whose intervals do not overlap, widest gap first, at most four', () => {
+  // Ana/Ben the same; M.26 130/150 vs Quince A 30/50 (46.18–72.39) → 7.91 (M.9 is a single batch, so the lower
+  // end among rootstocks is Quince A). Freeze bands and degree-hour quarters hold single batches here, so they are
+  // not singled out; species (Apple 69.99–81.45 vs Pear 46.18–72.39), cultivar and method overlap.
+  it('lists the differences whose intervals do not overlap, widest gap first, between groups of two or more batches', () => {
     expect(report.findings.map((f) => [f.dimension, f.higher.label, f.lower.label])).toEqual([
       ['room', 'Cellar', 'Garage'],
       ['grafter', 'Ana', 'Ben'],
-      ['rootstock', 'M.26', 'M.9'],
-      ['freeze', 'No freeze hours', '1 to 6 freeze hours'],
+      ['rootstock', 'M.26', 'Quince A'],
     ]);
     expect(report.findings[0].gapPct).toBeCloseTo(80.302 - 59.617, 2);
     expect(report.findings.every((f) => f.clear)).toBe(true);
+  });
+
+  // Each group is two batches of the given counts; gaps between Wilson bounds on 200 grafts, hand-computed:
+  // d 81.13, b 43.59, a 28.15, e 27.53, c 7.36 points.
+  it('keeps at most four findings, widest gap first', () => {
+    const group = (key: string, grown: number, planted: number): TakeGroup => ({ key, label: key, ...takeFigure([outcome({ planted, grown }), outcome({ planted, grown })])! });
+    const dimension = (key: string, [hiGrown, loGrown]: [number, number]) => ({ key, title: key, groups: [group('high', hiGrown, 100), group('low', loGrown, 100)] });
+    const found = strongestDifferences([dimension('a', [90, 50]), dimension('b', [95, 40]), dimension('c', [80, 60]), dimension('d', [99, 10]), dimension('e', [85, 45])]);
+    expect(found.map((f) => f.dimension)).toEqual(['d', 'b', 'a', 'e']);
   });
 
   it('words a finding with both takes, their grafts and intervals', () => {
@@ -112,10 +123,14 @@ describe('strongestDifferences', () => {
     expect(only.text).toMatch(/may well be chance\.$/);
   });
 
-  it('ignores groups under 20 grafts and catch-all groups', () => {
+  it('ignores groups under 20 grafts, single batches and catch-all groups', () => {
     const small = buildSeasonReport(2026, [
-      outcome({ planted: 19, grown: 19, grafter: 'Cy' }),
+      outcome({ planted: 10, grown: 10, grafter: 'Cy' }),
+      outcome({ planted: 9, grown: 9, grafter: 'Cy' }),
       outcome({ planted: 200, grown: 20, grafter: '' }),
+      outcome({ planted: 200, grown: 20, grafter: '' }),
+      outcome({ planted: 300, grown: 290, grafter: 'Ed' }),
+      outcome({ planted: 100, grown: 50, grafter: 'Di' }),
       outcome({ planted: 100, grown: 50, grafter: 'Di' }),
     ]);
     expect(small.findings.filter((f) => f.dimension === 'grafter')).toEqual([]);
