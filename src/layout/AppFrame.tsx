@@ -10,11 +10,14 @@ const topLink = ({ isActive }: { isActive: boolean }) =>
 const bottomLink = ({ isActive }: { isActive: boolean }) =>
   `flex min-h-14 flex-1 flex-col items-center justify-center gap-0.5 text-sm font-semibold ${isActive ? 'bg-frost text-slate-deep' : 'text-paper'}`;
 
-/** Wide screens: one top bar with the sections. Phones: brand and account on top, sections in a bar under the thumb. */
+/**
+ * Wide screens: one top bar with the sections. Phones: brand and account on top, sections in a bar under the thumb,
+ * sticky rather than fixed so it never covers the end of the page.
+ */
 export function AppFrame() {
   const { nursery } = useCurrentSession();
   return (
-    <div className="flex min-h-dvh flex-col pb-16 md:pb-0">
+    <div className="flex min-h-dvh flex-col">
       <SkipLink />
       <header className="bg-slate-deep text-paper">
         <div className="mx-auto flex max-w-6xl items-center gap-4 px-4 py-2">
@@ -37,7 +40,7 @@ export function AppFrame() {
       <main id="main" tabIndex={-1} className="mx-auto w-full max-w-6xl flex-1 px-4 py-6 focus:outline-none sm:py-8">
         <Outlet />
       </main>
-      <nav aria-label="Sections" className="fixed inset-x-0 bottom-0 z-30 flex border-t border-slate bg-slate-deep md:hidden">
+      <nav aria-label="Sections" className="sticky bottom-0 z-30 flex border-t border-slate bg-slate-deep md:hidden">
         {NAV_ITEMS.map(({ to, label, Icon }) => (
           <NavLink key={to} to={to} className={bottomLink}>
             <Icon />

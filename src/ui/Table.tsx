@@ -43,9 +43,9 @@ export function Table<T>({ caption, columns, rows, rowKey }: TableProps<T>) {
                 role="cell"
                 key={c.header}
                 data-label={c.header}
-                className={`flex gap-3 py-1 align-top before:w-24 before:shrink-0 before:text-sm before:font-semibold before:text-ink-soft before:content-[attr(data-label)] md:table-cell md:px-3 md:py-3 md:before:content-none ${c.figure ? 'font-mono text-sm md:whitespace-nowrap' : ''}`}
+                className={`flex items-baseline gap-3 py-1 align-baseline before:w-24 before:shrink-0 before:text-sm before:font-semibold before:text-ink-soft before:content-[attr(data-label)] md:table-cell md:px-3 md:py-3 md:before:content-none ${c.figure ? 'md:whitespace-nowrap' : ''}`}
               >
-                <span className="min-w-0 break-words">{c.cell(row)}</span>
+                <span className={`min-w-0 break-words ${c.figure ? 'font-mono text-sm' : ''}`}>{c.cell(row)}</span>
               </td>
             ))}
           </tr>

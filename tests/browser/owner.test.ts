@@ -1,23 +1,16 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { signIn } from '../support/testApp';
 import { openAccountMenu, signInWithForm, signOut } from './support/actions';
-import { startBrowserApp, type BrowserApp } from './support/browserApp';
-import { heading, launchBrowser, openPage, screenshot, sectionNav, visible, WIDTHS, type Browser } from './support/browser';
+import { useBrowserSuite } from './support/browserApp';
+import { heading, openPage, screenshot, sectionNav, visible, WIDTHS } from './support/browser';
+
+const suite = useBrowserSuite();
 
 describe.each(WIDTHS)('an owner at %i px wide', (width) => {
-  let t: BrowserApp;
-  let browser: Browser;
-  beforeAll(async () => {
-    t = await startBrowserApp();
-    browser = await launchBrowser();
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await t?.close();
-  });
 
   it('signs in by picking a demo account, and lands on the rooms list', async () => {
-    const { page, problems } = await openPage(browser, width);
+    const t = suite.app();
+    const { page, problems } = await openPage(suite.browser(), width);
     await page.goto(`${t.origin}/rooms`);
     // Signed out, the app sends the visitor to sign-in first.
     await visible(heading(page, 'Sign in'));
@@ -36,7 +29,8 @@ describe.each(WIDTHS)('an owner at %i px wide', (width) => {
   });
 
   it('adds a room and a logger, then moves the logger on the nursery clock', async () => {
-    const { page, problems, expect: tolerate } = await openPage(browser, width);
+    const t = suite.app();
+    const { page, problems, expect: tolerate } = await openPage(suite.browser(), width);
     await signInWithForm(page, t.origin, 'owner@example.com');
     const room = `Seed shed ${width}`;
     const label = `T-${width}`;
@@ -106,7 +100,8 @@ describe.each(WIDTHS)('an owner at %i px wide', (width) => {
   });
 
   it('invites a person, who follows the e-mailed link, chooses a password and is signed in', async () => {
-    const { page, problems, expect: tolerate } = await openPage(browser, width);
+    const t = suite.app();
+    const { page, problems, expect: tolerate } = await openPage(suite.browser(), width);
     await signInWithForm(page, t.origin, 'owner@example.com');
     const email = `fern.${width}@example.com`;
     await sectionNav(page).getByRole('link', { name: 'Settings' }).click();
@@ -119,7 +114,7 @@ describe.each(WIDTHS)('an owner at %i px wide', (width) => {
     await visible(invitations.getByRole('cell', { name: email }));
 
     const tokens = page.getByRole('region', { name: 'API tokens' });
-    await tokens.getByLabel('Token name').fill('Packing shed PC');
+    await tokens.getByLabel('Token name').fill(`Packing shed PC ${width}`);
     await tokens.getByRole('button', { name: 'Create token' }).click();
     await visible(tokens.getByText('you will not see this token again'));
     const secret = await tokens.getByLabel('New API token').textContent();
@@ -127,7 +122,7 @@ describe.each(WIDTHS)('an owner at %i px wide', (width) => {
     await visible(tokens.getByText(`coldknit login --server ${t.origin}`));
     await screenshot(page, 'settings');
     await tokens.getByRole('button', { name: 'I have saved it' }).click();
-    await visible(tokens.getByRole('cell', { name: 'Packing shed PC' }));
+    await visible(tokens.getByRole('cell', { name: `Packing shed PC ${width}` }));
 
     const mail = t.mail.messages.find((m) => m.to.includes(email));
     expect(mail?.subject).toContain('Brackenfold Nursery');
@@ -138,7 +133,7 @@ describe.each(WIDTHS)('an owner at %i px wide', (width) => {
     await openAccountMenu(page);
     await page.getByRole('link', { name: 'Captured mail' }).click();
     await visible(heading(page, 'Captured mail'));
-    await page.getByRole('link', { name: /You're invited/ }).first().click();
+    await page.getByRole('link', { name: new RegExp(`to ${email}`) }).click();
     await visible(page.getByRole('link', { name: link! }));
     await visible(page.frameLocator('iframe').getByText('Choose your password'));
     await screenshot(page, 'captured-mail');

@@ -1,22 +1,16 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import request from 'supertest';
+import { describe, expect, it } from 'vitest';
 import { openAccountMenu, signInWithForm, signOut } from './support/actions';
-import { startBrowserApp, type BrowserApp } from './support/browserApp';
-import { heading, launchBrowser, openPage, screenshot, visible, WIDTHS, type Browser } from './support/browser';
+import { useBrowserSuite } from './support/browserApp';
+import { heading, openPage, screenshot, visible, WIDTHS } from './support/browser';
+
+const suite = useBrowserSuite();
 
 describe.each(WIDTHS)('the remaining pages at %i px wide', (width) => {
-  let t: BrowserApp;
-  let browser: Browser;
-  beforeAll(async () => {
-    t = await startBrowserApp();
-    browser = await launchBrowser();
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await t?.close();
-  });
 
   it('creates a new nursery, whose time zone defaults to the browser zone, and signs its owner in', async () => {
-    const { page, problems } = await openPage(browser, width);
+    const t = suite.app();
+    const { page, problems } = await openPage(suite.browser(), width);
     await page.goto(`${t.origin}/sign-in`);
     await page.getByRole('link', { name: 'Create an account' }).click();
     await visible(heading(page, 'Create a nursery'));
@@ -42,8 +36,15 @@ describe.each(WIDTHS)('the remaining pages at %i px wide', (width) => {
   });
 
   it('switches the temperature unit, changes the password and shows a 404 inside the frame', async () => {
-    const { page, problems } = await openPage(browser, width);
-    await signInWithForm(page, t.origin, 'staff@example.com');
+    const t = suite.app();
+    const { page, problems } = await openPage(suite.browser(), width);
+    // A person of their own for each width, since the password changes here.
+    const email = `hollis.${width}@example.com`;
+    const signup = await request(t.app)
+      .post('/api/auth/signup')
+      .send({ nurseryName: `Larchgate ${width}`, name: 'Hollis Penn', email, password: 'coldknit-demo', timeZone: 'America/Chicago' });
+    expect(signup.status).toBe(201);
+    await signInWithForm(page, t.origin, email);
     await openAccountMenu(page);
     await page.getByRole('radio', { name: '°F' }).check();
     await page.getByRole('link', { name: 'Change password' }).click();
@@ -62,7 +63,7 @@ describe.each(WIDTHS)('the remaining pages at %i px wide', (width) => {
     await visible(heading(page, 'No such room'));
 
     await signOut(page);
-    await signInWithForm(page, t.origin, 'staff@example.com', 'frost on the cellar door');
+    await signInWithForm(page, t.origin, email, 'frost on the cellar door');
     await openAccountMenu(page);
     // The unit is stored with the person, so it survives signing out and in.
     expect(await page.getByRole('radio', { name: '°F' }).isChecked()).toBe(true);

@@ -1,25 +1,18 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { signInWithForm } from './support/actions';
-import { startBrowserApp, type BrowserApp } from './support/browserApp';
-import { heading, launchBrowser, openPage, screenshot, sectionNav, visible, WIDTHS, type Browser } from './support/browser';
+import { useBrowserSuite } from './support/browserApp';
+import { heading, openPage, screenshot, sectionNav, visible, WIDTHS } from './support/browser';
 
 /** Labels of every control that changes data; a viewer must meet none of them (the server refuses them anyway). */
 const WRITE_CONTROLS = /^(Add room|Add logger|Add a logger here|Edit|Delete|Record move|Send invitation|Create token|Save nursery|Remove|Revoke)$/;
 
+const suite = useBrowserSuite();
+
 describe.each(WIDTHS)('a viewer at %i px wide', (width) => {
-  let t: BrowserApp;
-  let browser: Browser;
-  beforeAll(async () => {
-    t = await startBrowserApp();
-    browser = await launchBrowser();
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await t?.close();
-  });
 
   it('reads rooms, loggers and settings without meeting a single write control', async () => {
-    const { page, problems } = await openPage(browser, width);
+    const t = suite.app();
+    const { page, problems } = await openPage(suite.browser(), width);
     await signInWithForm(page, t.origin, 'viewer@example.com');
     const writeControls = () => page.getByRole('main').getByRole('link').or(page.getByRole('main').getByRole('button')).filter({ hasText: WRITE_CONTROLS });
 

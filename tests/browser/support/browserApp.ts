@@ -4,7 +4,9 @@ import { createServer, type RequestListener } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { afterAll, beforeAll } from 'vitest';
 import { startTestApp, type TestApp } from '../../support/testApp';
+import { launchBrowser, type Browser } from './browser';
 
 const CLIENT_DIR = join(import.meta.dirname, '..', '..', '..', 'dist');
 
@@ -45,4 +47,29 @@ export async function startBrowserApp(): Promise<BrowserApp> {
       await rm(mailDir, { recursive: true, force: true });
     },
   };
+}
+
+/**
+ * One app and one browser for a whole test file, shared by its tests at every width (each test names what it creates
+ * after its width, so they do not collide). Starting them once per file keeps the suite's run time down.
+ */
+export function useBrowserSuite(): { app: () => BrowserApp; browser: () => Browser } {
+  let app: BrowserApp | undefined;
+  let browser: Browser | undefined;
+  beforeAll(async () => {
+    app = await startBrowserApp();
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+    await app?.close();
+  });
+  return {
+    app: () => app ?? fail('the app did not start'),
+    browser: () => browser ?? fail('the browser did not start'),
+  };
+}
+
+function fail(message: string): never {
+  throw new Error(message);
 }
