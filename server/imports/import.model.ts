@@ -42,7 +42,8 @@ export class Import extends Model<InferAttributes<Import>, InferCreationAttribut
         return typeof raw === 'string' ? JSON.parse(raw) : raw;
       },
     });
-    const count = { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 };
+    // A fresh object per attribute: Sequelize writes the column name into the definition it is given.
+    const count = () => ({ type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 });
     Import.init(
       {
         id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
@@ -56,12 +57,12 @@ export class Import extends Model<InferAttributes<Import>, InferCreationAttribut
         status: { type: DataTypes.ENUM('running', 'completed', 'failed'), allowNull: false },
         errorCode: { type: DataTypes.STRING(40), allowNull: true },
         errorMessage: { type: DataTypes.TEXT, allowNull: true },
-        rowsTotal: count,
-        rowsAccepted: count,
-        rowsRejected: count,
-        rowsDuplicates: count,
-        rowsConflicts: count,
-        rowsStored: count,
+        rowsTotal: count(),
+        rowsAccepted: count(),
+        rowsRejected: count(),
+        rowsDuplicates: count(),
+        rowsConflicts: count(),
+        rowsStored: count(),
         firstAt: { type: DataTypes.DATE(3), allowNull: true },
         lastAt: { type: DataTypes.DATE(3), allowNull: true },
         detection: json('detection'),

@@ -11,7 +11,7 @@ import { Logger } from '../loggers/logger.model';
 import { Nursery } from '../nurseries/nursery.model';
 import { storeBatch } from '../readings/readingStore';
 import { notifyReadingsChanged } from '../readings/readingEvents';
-import { digestFile } from './fileDigest';
+import { digestWithAppendBase, type AppendBase } from './appendedFile';
 import { Import } from './import.model';
 import { lockLogger } from './importLock';
 
@@ -90,23 +90,39 @@ const iso = (t: number | null) => (t === null ? null : new Date(t).toISOString()
  */
 export async function importFile(pool: Pool, auth: AuthContext, file: IncomingFile, settings: ImportSettings): Promise<ImportOutcome> {
   const nursery = await Nursery.findByPk(auth.nurseryId);
-  const options = readOptions(settings, nursery!.timeZone);
-  const digest = await digestFile(file.path);
+  const { digest, append: appendBase } = await digestWithAppendBase(auth.nurseryId, file.path);
   if (digest.bytes === 0) throw new ApiError(422, 'empty', 'The file is empty. Pick the file the logger exported, with its readings.');
   if (!settings.dryRun) {
     const same = await Import.findOne({ where: { nurseryId: auth.nurseryId, fileSha256: digest.sha256, status: 'completed' }, order: [['id', 'DESC']] });
     if (same) return alreadyImported(same);
   }
+  const append = settings.dryRun ? null : await appendFor(appendBase, settings);
+  // The new part alone may be too short to show the date order or unit; the file's beginning already did.
+  const options = append
+    ? readOptions({ ...settings, dateOrder: settings.dateOrder ?? append.base.detection!.timestamp.dateOrder ?? undefined, unit: settings.unit ?? append.base.detection!.temperature.unit }, nursery!.timeZone)
+    : readOptions(settings, nursery!.timeZone);
 
-  const run = new ImportRun(pool, auth, file, settings, digest);
+  const run = new ImportRun(pool, auth, file, settings, digest, append);
   try {
-    const summary = await readLoggerFile(fileSource(file.path), options, (batch) => run.take(batch), { onDetected: (d) => run.begin(d) });
+    const summary = await readLoggerFile(append?.source ?? fileSource(file.path), options, (batch) => run.take(batch), { onDetected: (d) => run.begin(d) })
+      .catch((err) => {
+        // A re-export whose new part holds only blank lines has nothing to add; that is not an error.
+        if (append && isImportError(err) && err.code === 'no_data') return null;
+        throw err;
+      });
     return await run.finish(summary);
   } catch (err) {
     throw await run.fail(asApiError(err));
   } finally {
     await run.release();
   }
+}
+
+/** An append base counts only for the same logger the person names (if they name one). */
+async function appendFor(append: AppendBase | null, settings: ImportSettings): Promise<AppendBase | null> {
+  if (!append || !settings.logger) return append;
+  const logger = await Logger.findByPk(append.base.loggerId!);
+  return logger && (logger.label === settings.logger || logger.serial === settings.logger) ? append : null;
 }
 
 /** A byte-identical file was imported before: say so at once, with that import's own accounting. */
@@ -142,13 +158,28 @@ class ImportRun {
     private readonly file: IncomingFile,
     private readonly settings: ImportSettings,
     private readonly digest: { sha256: string; bytes: number },
+    /** Set when the file continues an earlier import: only its new part is read. */
+    private readonly append: AppendBase | null,
   ) {}
+
+  /** Lines the reader counts in the head-plus-new-part stream, back to the file's physical line numbers. */
+  private physicalLine(line: number): number {
+    if (!this.append || line <= this.append.headLines) return line;
+    return line + this.append.prefixLines - this.append.headLines;
+  }
+
+  private physicalNotes(notes: LineNote[]): LineNote[] {
+    return notes.map((n) => ({ ...n, line: this.physicalLine(n.line) }));
+  }
 
   /** Once the layout is known: find the logger, write the record, take the logger's lock, open one transaction. */
   async begin(detection: Detection): Promise<void> {
     const named = this.settings.logger ?? detection.loggerHint;
     if (this.settings.dryRun && !named) return;
-    this.logger = await resolveLogger(this.auth.nurseryId, this.settings.logger, detection);
+    this.logger = this.append
+      ? await Logger.findByPk(this.append.base.loggerId!)
+      : await resolveLogger(this.auth.nurseryId, this.settings.logger, detection);
+    if (!this.logger) throw notFound('The logger of the earlier import this file continues');
     this.conn = await this.pool.getConnection();
     if (this.settings.dryRun) return;
     this.record = await Import.create({
@@ -162,6 +193,7 @@ class ImportRun {
   }
 
   async take(batch: Reading[]): Promise<void> {
+    if (this.append) batch = batch.map((r) => ({ ...r, line: this.physicalLine(r.line) }));
     if (this.preview.length < PREVIEW_ROWS) this.preview.push(...batch.slice(0, PREVIEW_ROWS - this.preview.length));
     if (!this.conn || !this.logger) return;
     const out = await storeBatch(this.conn, this.logger.id, this.record?.id ?? null, batch);
@@ -171,7 +203,8 @@ class ImportRun {
     if (this.storedConflicts.length < MAX_NOTED) this.storedConflicts.push(...out.conflicts.slice(0, MAX_NOTED - this.storedConflicts.length));
   }
 
-  async finish(summary: ReadSummary): Promise<ImportOutcome> {
+  async finish(read: ReadSummary | null): Promise<ImportOutcome> {
+    const summary = this.withEarlierPart(read);
     const compared = this.logger !== null;
     const rows = {
       total: summary.rows.total,
@@ -191,10 +224,36 @@ class ImportRun {
       lastAt: summary.span.last === null ? null : new Date(summary.span.last),
       rejectedLines: summary.rejectedLines, conflictLines,
     });
-    if (this.stored > 0 && summary.span.first !== null) {
-      await notifyReadingsChanged({ nurseryId: this.auth.nurseryId, loggerId: this.logger!.id, from: summary.span.first, to: summary.span.last! });
+    if (this.stored > 0 && read && read.span.first !== null) {
+      await notifyReadingsChanged({ nurseryId: this.auth.nurseryId, loggerId: this.logger!.id, from: read.span.first, to: read.span.last! });
     }
     return outcome(false, false, presentImport(this.record, this.logger!.label), summary, rows, conflictLines, this.preview);
+  }
+
+  /**
+   * The whole file's accounting: for a continued file, the earlier import's rows (its stored readings now count as
+   * already there, its rejections and conflicts stand as they were, line for line) plus the new part's.
+   */
+  private withEarlierPart(read: ReadSummary | null): ReadSummary {
+    if (!this.append) return read!;
+    const base = this.append.base;
+    const tail = read ?? { detected: base.detection!, rows: { total: 0, accepted: 0, rejected: 0, duplicates: 0, conflicts: 0 }, rejectedLines: [], conflictLines: [], span: { first: null, last: null } };
+    return {
+      detected: base.detection!,
+      rows: {
+        total: base.rowsTotal + tail.rows.total,
+        accepted: tail.rows.accepted,
+        rejected: base.rowsRejected + tail.rows.rejected,
+        duplicates: base.rowsAccepted + base.rowsDuplicates + tail.rows.duplicates,
+        conflicts: base.rowsConflicts + tail.rows.conflicts,
+      },
+      rejectedLines: [...(base.rejectedLines ?? []), ...this.physicalNotes(tail.rejectedLines)].slice(0, MAX_NOTED),
+      conflictLines: [...(base.conflictLines ?? []), ...this.physicalNotes(tail.conflictLines)].slice(0, MAX_NOTED),
+      span: {
+        first: base.firstAt?.getTime() ?? tail.span.first,
+        last: Math.max(base.lastAt?.getTime() ?? -Infinity, tail.span.last ?? -Infinity),
+      },
+    };
   }
 
   /** Rolls back what this import stored and marks its record failed; answers the error to throw. */

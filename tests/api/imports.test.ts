@@ -77,6 +77,24 @@ describe('importing logger files through the API', () => {
     expect(stored.c).not.toBe(9.99);
   });
 
+  it('a re-export that continues an earlier file reads only the new part, with physical line numbers kept', async () => {
+    const label = 'IMP-5';
+    await staff.post('/api/loggers').send({ label });
+    const head = '# Invented test rig\nLogger: IMP-5\ntime,temperature °C\n';
+    const rows = (from: number, n: number) =>
+      Array.from({ length: n }, (_, i) => `${new Date(Date.UTC(2026, 3, 1) + (from + i) * 600_000).toISOString()},${(2 + ((from + i) % 7) / 10).toFixed(1)}\n`).join('');
+    const lastNight = `${head}${rows(0, 50)}2026-04-01T09:00:00Z,ERR\n${rows(51, 49)}`;
+    const tonight = `${lastNight}${rows(100, 20)}2026-04-02T00:00:00Z,oops\n${rows(121, 9)}`;
+    const first = await upload(Buffer.from(lastNight), 'k.csv', { logger: label });
+    expect(first.body.rows).toMatchObject({ total: 100, accepted: 99, rejected: 1 });
+    const second = await upload(Buffer.from(tonight), 'k.csv', { logger: label });
+    expect(second.status).toBe(201);
+    expect(second.body.rows).toEqual({ total: 130, accepted: 29, rejected: 2, duplicates: 99, conflicts: 0 });
+    // Line 54 of both files is the ERR row; the new bad row is line 3 + 121 = 124 of tonight's file.
+    expect(second.body.rejectedLines.map((n: { line: number }) => n.line)).toEqual([54, 124]);
+    expect(second.body.span.first).toBe(new Date(Date.UTC(2026, 3, 1)).toISOString());
+  });
+
   it('two imports of the same file at the same moment store each reading once', async () => {
     const label = 'IMP-3';
     const made = await staff.post('/api/loggers').send({ label });
