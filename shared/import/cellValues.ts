@@ -44,8 +44,10 @@ function readCell(raw: string, readWithUnit: (text: string) => CellValue | null)
   const text = raw.trim();
   if (text === '') return { kind: 'empty' };
   if (PLAIN_NUMBER.test(text)) {
-    if (SENSOR_CODE.test(text)) return { kind: 'sensor code', text };
-    return { kind: 'number', value: numberFromText(text), unit: null };
+    const value = numberFromText(text);
+    // Only numbers such as -999 or 9999 can be fault markers; most rows skip the second pattern.
+    if ((value <= -99 || value >= 999) && SENSOR_CODE.test(text)) return { kind: 'sensor code', text };
+    return { kind: 'number', value, unit: null };
   }
   const withUnit = readWithUnit(text);
   if (withUnit) return withUnit;

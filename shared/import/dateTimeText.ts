@@ -147,8 +147,19 @@ function withTimeOfDay(epochDay: number, match: RegExpExecArray, first: number, 
   return { localMs, offsetMinutes: offsetText === undefined ? null : offsetMinutesOf(offsetText) };
 }
 
+/** Files repeat one offset on every row (or two, across a clock change): remember the last one read. */
+let lastOffsetText = '';
+let lastOffsetMinutes = 0;
+
 /** "+01:00", "+0100", "+01", "Z", "UTC" → minutes east of UTC (ISO 8601 time-zone designators). */
 function offsetMinutesOf(text: string): number {
+  if (text === lastOffsetText) return lastOffsetMinutes;
+  lastOffsetText = text;
+  lastOffsetMinutes = parseOffset(text);
+  return lastOffsetMinutes;
+}
+
+function parseOffset(text: string): number {
   if (text === 'Z' || text === 'UTC' || text === 'GMT') return 0;
   const sign = text[0] === '-' ? -1 : 1;
   const digits = text.slice(1).replace(':', '');

@@ -35,7 +35,7 @@ export function lineEndingOf(text: string): PrefixTable['lineEnding'] {
 
 /** Splits the decoded prefix into physical lines; a prefix cut mid-file loses its unfinished last line. */
 export function prefixLines(text: string, lineEnding: PrefixTable['lineEnding'], complete: boolean): string[] {
-  const lines = text.split(lineEnding === 'CRLF' ? '\r\n' : lineEnding === 'LF' ? '\n' : '\r');
+  const lines = text.split(lineEnding === 'CR' ? '\r' : /\r?\n/);
   if (!complete && lines.length > 1) lines.pop();
   if (complete && lines.length > 0 && lines[lines.length - 1] === '') lines.pop();
   return lines;

@@ -22,7 +22,8 @@ export interface RecordHandlers {
   isDone?(): boolean;
 }
 
-const LINE_BREAK: Record<RecordStreamOptions['lineEnding'], string> = { LF: '\n', CRLF: '\r\n', CR: '\r' };
+/** LF and CRLF files take both endings: files pasted together from two exports mix them. */
+const LINE_BREAKS: Record<RecordStreamOptions['lineEnding'], string[]> = { LF: ['\r\n', '\n'], CRLF: ['\r\n', '\n'], CR: ['\r'] };
 
 /**
  * Streams the file through csv-parse (RFC 4180 quoting), one chunk at a time, never holding the file.
@@ -30,11 +31,10 @@ const LINE_BREAK: Record<RecordStreamOptions['lineEnding'], string> = { LF: '\n'
  * but copying it for every record made a million-row file several times slower (measured).
  */
 export async function streamRecords(source: ByteSourceFactory, options: RecordStreamOptions, handlers: RecordHandlers): Promise<void> {
-  const lineBreak = LINE_BREAK[options.lineEnding];
   const newlineChar = options.lineEnding === 'CR' ? '\r' : '\n';
   const parser = new Parser({
     delimiter: options.delimiter,
-    record_delimiter: lineBreak,
+    record_delimiter: LINE_BREAKS[options.lineEnding],
     relax_column_count: true,
     relax_quotes: true,
     ltrim: true,

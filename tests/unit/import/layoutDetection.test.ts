@@ -64,10 +64,16 @@ describe('delimiter, decimal comma and line ends', () => {
     expect(readings[0].c).toBe(3.5);
   });
 
-  it('CRLF and CR-only line ends', async () => {
+  it('CRLF, CR-only, and LF mixed with CRLF line ends', async () => {
     const crlf = await readText('Time,Temp C\r\n2025-01-13 08:00,3.5\r\n2025-01-13 08:30,3.6\r\n');
     expect(crlf.summary.detected.lineEnding).toBe('CRLF');
     expect(crlf.readings.map((r) => r.line)).toEqual([2, 3]);
+    const mixed = await readText('Time,Temp C\r\n2025-01-13 08:00,3.5\n2025-01-13 08:30,3.6\r\n2025-01-13 09:00,3.7\n');
+    expect(mixed.readings.map((r) => [r.line, r.c])).toEqual([
+      [2, 3.5],
+      [3, 3.6],
+      [4, 3.7],
+    ]);
     const cr = await readText('Time,Temp C\r2025-01-13 08:00,3.5\r2025-01-13 08:30,3.6\r');
     expect(cr.summary.detected.lineEnding).toBe('CR');
     expect(cr.readings.map((r) => r.line)).toEqual([2, 3]);
