@@ -19,6 +19,7 @@ import type { Mailer } from './mail/mailer';
 import { nurseryRoutes } from './nurseries/nurseries.routes';
 import { profileRoutes } from './profiles/profiles.routes';
 import { roomRoutes } from './rooms/rooms.routes';
+import { seasonRoutes } from './season/season.routes';
 import { systemRoutes } from './system/system.routes';
 import { tokenRoutes } from './tokens/tokens.routes';
 import { userRoutes } from './users/users.routes';
@@ -59,6 +60,7 @@ export function createApp(deps: AppDeps): { app: Express; routes: RouteInfo[] } 
     ...profileRoutes(),
     ...batchRoutes(sequelize),
     ...exposureRoutes(deps.pool),
+    ...seasonRoutes(sequelize, deps.pool),
   ]);
   app.use('/api', originGuard(config.appOrigin), authenticate(config.jwtSecret), router);
   app.use('/api', (_req, _res, next) => next(new ApiError(404, 'no_such_route', 'There is no such API route.')));

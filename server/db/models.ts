@@ -10,6 +10,7 @@ import { Import } from '../imports/import.model';
 import { NurseryProfile } from '../profiles/nurseryProfile.model';
 import { Batch } from '../batches/batch.model';
 import { BatchPlacement } from '../batches/batchPlacement.model';
+import { SEASON_MODELS } from '../season/seasonModels';
 
 /** Binds every model to this Sequelize and declares the associations once. */
 export function initModels(sequelize: Sequelize): void {
@@ -21,4 +22,5 @@ export function initModels(sequelize: Sequelize): void {
   for (const model of [NurseryProfile, Batch, BatchPlacement]) model.initModel(sequelize);
   Batch.hasMany(BatchPlacement, { foreignKey: 'batchId', as: 'placements' });
   BatchPlacement.belongsTo(Batch, { foreignKey: 'batchId', as: 'batch' });
+  for (const model of SEASON_MODELS) model.initModel(sequelize);
 }

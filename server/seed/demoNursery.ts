@@ -7,6 +7,7 @@ import { Nursery } from '../nurseries/nursery.model';
 import { Room } from '../rooms/room.model';
 import { User } from '../users/user.model';
 import { DEMO_PASSWORD, DEMO_USERS } from './demoAccounts';
+import { seedDemoSeasons } from './demoSeason';
 import { topUpDemoReadings } from './demoReadings';
 import { DEMO_LOGGERS, DEMO_NURSERY, DEMO_ROOMS, DEMO_SEASON_START } from './demoData';
 
@@ -31,6 +32,7 @@ async function createDemoRecords(sequelize: Sequelize): Promise<number> {
       const logger = await Logger.create({ nurseryId: nursery.id, label: l.label, serial: l.serial, notes: l.notes }, { transaction });
       await LoggerPlacement.create({ loggerId: logger.id, roomId: rooms.get(l.room)!.id, placedFrom: DEMO_SEASON_START }, { transaction });
     }
+    await seedDemoSeasons(nursery.id, DEMO_NURSERY.timeZone, rooms, transaction);
     return nursery.id;
   });
   console.log(`Seeded the demo nursery "${DEMO_NURSERY.name}".`);

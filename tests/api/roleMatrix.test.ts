@@ -28,6 +28,15 @@ const batchBody = async (owner: Agent) => ({
   graftedOn: new Date(Date.now() - 86_400_000).toISOString().slice(0, 10), placedAt: new Date(Date.now() - 3_600_000).toISOString(),
 });
 const newBatch = async (owner: Agent) => (await owner.post('/api/batches').send(await batchBody(owner))).body.id as number;
+const daysAgo = (days: number) => new Date(Date.now() - days * 86_400_000).toISOString().slice(0, 10);
+/** A fresh batch with all its grafts planted two days ago (dates in UTC: the demo nursery's Chicago is behind, so they are never ahead of its calendar). */
+const newPlanting = async (owner: Agent) => {
+  const batchId = (await owner.post('/api/batches').send({ ...(await batchBody(owner)), graftedOn: daysAgo(4), placedAt: new Date(Date.now() - 3 * 86_400_000).toISOString() })).body.id as number;
+  const plantingId = (await owner.post(`/api/batches/${batchId}/plantings`).send({ plantedOn: daysAgo(2), count: 5, location: 'Matrix bed' })).body.id as number;
+  return { batchId, plantingId };
+};
+const newAssessment = async (owner: Agent) =>
+  (await owner.post(`/api/batches/${(await newPlanting(owner)).batchId}/assessments`).send({ assessedOn: daysAgo(1), grown: 4 })).body.id as number;
 const newProfile = async (owner: Agent) => (await owner.post('/api/profiles').send({ from: 'pear', key: unique('p'), name: 'Matrix pear' })).body.key as string;
 
 const CASES: Record<string, Case> = {
@@ -104,6 +113,22 @@ const CASES: Record<string, Case> = {
   'POST /api/batches/:id/plant-out': { prepare: async (o) => ({ path: `/api/batches/${await newBatch(o)}/plant-out`, body: {} }), ok: 200 },
   'GET /api/batches/:id/exposure': { prepare: async (o) => ({ path: `/api/batches/${await newBatch(o)}/exposure` }), ok: 200 },
   'GET /api/exposure/batches': { prepare: async () => ({ path: '/api/exposure/batches' }), ok: 200 },
+  'GET /api/batches/:id/outcome': { prepare: async (o) => ({ path: `/api/batches/${(await newPlanting(o)).batchId}/outcome` }), ok: 200 },
+  'POST /api/batches/:id/plantings': {
+    prepare: async (o) => ({ path: `/api/batches/${await newBatch(o)}/plantings`, body: { plantedOn: daysAgo(1), count: 2, location: 'Matrix bed' } }),
+    ok: 201,
+  },
+  'PATCH /api/plantings/:id': { prepare: async (o) => ({ path: `/api/plantings/${(await newPlanting(o)).plantingId}`, body: { location: 'Bed 2' } }), ok: 200 },
+  'DELETE /api/plantings/:id': { prepare: async (o) => ({ path: `/api/plantings/${(await newPlanting(o)).plantingId}` }), ok: 204 },
+  'POST /api/batches/:id/assessments': {
+    prepare: async (o) => ({ path: `/api/batches/${(await newPlanting(o)).batchId}/assessments`, body: { assessedOn: daysAgo(1), grown: 3 } }),
+    ok: 201,
+  },
+  'PATCH /api/assessments/:id': { prepare: async (o) => ({ path: `/api/assessments/${await newAssessment(o)}`, body: { grown: 5 } }), ok: 200 },
+  'DELETE /api/assessments/:id': { prepare: async (o) => ({ path: `/api/assessments/${await newAssessment(o)}` }), ok: 204 },
+  'GET /api/seasons': { prepare: async () => ({ path: '/api/seasons' }), ok: 200 },
+  'GET /api/seasons/:season/report': { prepare: async () => ({ path: '/api/seasons/2026/report' }), ok: 200 },
+  'GET /api/seasons/:season/export': { prepare: async () => ({ path: '/api/seasons/2026/export' }), ok: 200 },
 };
 
 const SESSION_CHANGING = new Set(['/api/auth/login', '/api/auth/logout', '/api/auth/signup']);

@@ -3,6 +3,7 @@ import * as foundation from './001-foundation';
 import * as apiTokens from './002-api-tokens';
 import * as readingsImports from './003-readings-imports';
 import * as batchesProfiles from './004-batches-profiles';
+import * as season from './006-season';
 
 export interface Migration {
   name: string;
@@ -16,4 +17,5 @@ export const migrations: Migration[] = [
   { name: '002-api-tokens', ...apiTokens },
   { name: '003-readings-imports', ...readingsImports },
   { name: '004-batches-profiles', ...batchesProfiles },
+  { name: '006-season', ...season },
 ];
