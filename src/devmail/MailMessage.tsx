@@ -56,7 +56,7 @@ export function MailMessage({ mail, zone }: { mail: CapturedMail; zone: string }
       {view === 'html' && mail.html ? (
         <iframe title={`Message: ${mail.subject}`} sandbox="" srcDoc={mail.html} className="h-96 w-full rounded-md border border-frost-deep bg-white" />
       ) : (
-        <pre className="overflow-x-auto rounded-md border border-frost-deep bg-white p-3 font-mono text-sm whitespace-pre-wrap">{mail.text}</pre>
+        <pre className="rounded-md border border-frost-deep bg-white p-3 font-mono text-sm break-words whitespace-pre-wrap">{mail.text}</pre>
       )}
     </article>
   );

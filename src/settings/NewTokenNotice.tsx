@@ -29,11 +29,11 @@ export function NewTokenNotice({ token, origin, onDone }: { token: CreatedToken;
       </p>
       <div className="mt-3 text-sm">
         <p>Use it from the command line on the computer that reads the loggers:</p>
-        <pre className="mt-1 overflow-x-auto rounded-md bg-slate-deep px-3 py-2 font-mono text-frost">
+        <pre className="mt-1 rounded-md bg-slate-deep px-3 py-2 font-mono break-all whitespace-pre-wrap text-frost">
           <code>coldknit login --server {origin}</code>
         </pre>
         <p className="mt-2">and paste the token when asked, or set these instead (for scheduled imports):</p>
-        <pre className="mt-1 overflow-x-auto rounded-md bg-slate-deep px-3 py-2 font-mono text-frost">
+        <pre className="mt-1 rounded-md bg-slate-deep px-3 py-2 font-mono break-all whitespace-pre-wrap text-frost">
           <code>{`COLDKNIT_SERVER=${origin}\nCOLDKNIT_TOKEN=<the token>`}</code>
         </pre>
       </div>

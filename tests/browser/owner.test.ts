@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { signIn } from '../support/testApp';
 import { openAccountMenu, signInWithForm, signOut } from './support/actions';
 import { useBrowserSuite } from './support/browserApp';
-import { heading, openPage, screenshot, sectionNav, visible, WIDTHS } from './support/browser';
+import { heading, openPage, recordPage, sectionNav, visible, WIDTHS } from './support/browser';
 
 const suite = useBrowserSuite();
 
@@ -14,16 +14,16 @@ describe.each(WIDTHS)('an owner at %i px wide', (width) => {
     await page.goto(`${t.origin}/rooms`);
     // Signed out, the app sends the visitor to sign-in first.
     await visible(heading(page, 'Sign in'));
-    await screenshot(page, 'sign-in');
+    await recordPage(page, 'sign-in');
     await page.getByRole('button', { name: /owner@example\.com/ }).click();
     expect(await page.getByLabel('E-mail').inputValue()).toBe('owner@example.com');
     await page.getByRole('button', { name: 'Sign in', exact: true }).click();
     await visible(heading(page, 'Rooms'));
     await visible(page.getByRole('link', { name: 'Root cellar' }));
     expect(new URL(page.url()).pathname).toBe('/rooms');
-    await screenshot(page, 'rooms');
+    await recordPage(page, 'rooms');
     await openAccountMenu(page);
-    await screenshot(page, 'account-menu');
+    await recordPage(page, 'account-menu');
     expect(problems).toEqual([]);
     await page.close();
   });
@@ -39,7 +39,7 @@ describe.each(WIDTHS)('an owner at %i px wide', (width) => {
     await visible(heading(page, 'Add a room'));
     await page.getByRole('button', { name: 'Add room' }).click();
     await visible(page.getByText('Give the room a name'));
-    await screenshot(page, 'room-new-errors');
+    await recordPage(page, 'room-new-errors');
     await page.getByLabel('Name').fill(room);
     await page.getByLabel('Kind').selectOption('cellar');
     await page.getByLabel('Notes').fill('Stone walls; stays near 2 °C through January.');
@@ -54,7 +54,7 @@ describe.each(WIDTHS)('an owner at %i px wide', (width) => {
     await page.getByLabel('Label').fill(label);
     await page.getByLabel('Serial number').fill(`SN-${width}-77`);
     await page.getByLabel('Room').selectOption({ label: 'Not in a room yet' });
-    await screenshot(page, 'logger-new');
+    await recordPage(page, 'logger-new');
     await page.getByRole('button', { name: 'Add logger' }).click();
     await visible(heading(page, label));
     await visible(page.getByText('Never placed'));
@@ -79,7 +79,7 @@ describe.each(WIDTHS)('an owner at %i px wide', (width) => {
     await page.getByRole('button', { name: 'Record move' }).click();
     await visible(page.getByText('Moved to Root cellar now.'));
     await visible(page.getByRole('cell', { name: 'still there' }));
-    await screenshot(page, 'logger-detail');
+    await recordPage(page, 'logger-detail');
 
     const agent = await signIn(t.app, 'owner@example.com');
     const saved = (await agent.get(`/api/loggers/${loggerId}`)).body as { roomId: number; placements: { from: string; to: string | null }[] };
@@ -90,11 +90,11 @@ describe.each(WIDTHS)('an owner at %i px wide', (width) => {
     await sectionNav(page).getByRole('link', { name: 'Rooms' }).click();
     await page.getByRole('link', { name: room }).click();
     await visible(page.getByRole('heading', { name: 'Loggers here before' }));
-    await screenshot(page, 'room-detail');
+    await recordPage(page, 'room-detail');
     await sectionNav(page).getByRole('link', { name: 'Loggers' }).click();
     await visible(heading(page, 'Loggers'));
     await visible(page.getByRole('link', { name: label }));
-    await screenshot(page, 'loggers');
+    await recordPage(page, 'loggers');
     expect(problems).toEqual([]);
     await page.close();
   });
@@ -120,7 +120,7 @@ describe.each(WIDTHS)('an owner at %i px wide', (width) => {
     const secret = await tokens.getByLabel('New API token').textContent();
     expect(secret).toMatch(/^ckt_/);
     await visible(tokens.getByText(`coldknit login --server ${t.origin}`));
-    await screenshot(page, 'settings');
+    await recordPage(page, 'settings');
     await tokens.getByRole('button', { name: 'I have saved it' }).click();
     await visible(tokens.getByRole('cell', { name: `Packing shed PC ${width}` }));
 
@@ -136,7 +136,7 @@ describe.each(WIDTHS)('an owner at %i px wide', (width) => {
     await page.getByRole('link', { name: new RegExp(`to ${email}`) }).click();
     await visible(page.getByRole('link', { name: link! }));
     await visible(page.frameLocator('iframe').getByText('Choose your password'));
-    await screenshot(page, 'captured-mail');
+    await recordPage(page, 'captured-mail');
 
     await page.goto(`${t.origin}/rooms`);
     await signOut(page);
@@ -149,7 +149,7 @@ describe.each(WIDTHS)('an owner at %i px wide', (width) => {
     await page.getByRole('button', { name: /^Join/ }).click();
     await visible(page.getByText('Use at least 10 characters'));
     await page.getByLabel('Choose a password').fill('mossy stones under frost');
-    await screenshot(page, 'invite-accept');
+    await recordPage(page, 'invite-accept');
     await page.getByRole('button', { name: /^Join/ }).click();
     await visible(heading(page, 'Rooms'));
     await visible(page.getByRole('button', { name: /Fern Idlewild/ }));

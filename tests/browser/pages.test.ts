@@ -2,7 +2,7 @@ import request from 'supertest';
 import { describe, expect, it } from 'vitest';
 import { openAccountMenu, signInWithForm, signOut } from './support/actions';
 import { useBrowserSuite } from './support/browserApp';
-import { heading, openPage, screenshot, visible, WIDTHS } from './support/browser';
+import { heading, openPage, recordPage, visible, WIDTHS } from './support/browser';
 
 const suite = useBrowserSuite();
 
@@ -24,12 +24,12 @@ describe.each(WIDTHS)('the remaining pages at %i px wide', (width) => {
     await page.getByLabel('Your name').fill('Odile Brant');
     await page.getByLabel('E-mail').fill(`odile.${width}@example.com`);
     await page.getByLabel('Password', { exact: true }).fill('long enough passphrase');
-    await screenshot(page, 'sign-up');
+    await recordPage(page, 'sign-up');
     await page.getByRole('button', { name: 'Create nursery' }).click();
     await visible(heading(page, 'Rooms'));
     await visible(page.getByText('No rooms yet'));
     await visible(page.getByRole('banner').getByText(`Quillmere Grafts ${width}`, { exact: true }));
-    await screenshot(page, 'rooms-empty');
+    await recordPage(page, 'rooms-empty');
     await signOut(page);
     expect(problems).toEqual([]);
     await page.close();
@@ -52,13 +52,13 @@ describe.each(WIDTHS)('the remaining pages at %i px wide', (width) => {
     expect(await page.getByRole('radio', { name: '°F' }).isChecked()).toBe(true);
     await page.getByLabel('Current password').fill('coldknit-demo');
     await page.getByLabel('New password').fill('frost on the cellar door');
-    await screenshot(page, 'account');
+    await recordPage(page, 'account');
     await page.getByRole('button', { name: 'Change password' }).click();
     await visible(page.getByText('Password changed.'));
 
     await page.goto(`${t.origin}/nowhere/at/all`);
     await visible(heading(page, 'No such page'));
-    await screenshot(page, 'not-found');
+    await recordPage(page, 'not-found');
     await page.goto(`${t.origin}/rooms/abc`);
     await visible(heading(page, 'No such room'));
 

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { signInWithForm } from './support/actions';
 import { useBrowserSuite } from './support/browserApp';
-import { heading, openPage, screenshot, sectionNav, visible, WIDTHS } from './support/browser';
+import { heading, openPage, recordPage, sectionNav, visible, WIDTHS } from './support/browser';
 
 /** Labels of every control that changes data; a viewer must meet none of them (the server refuses them anyway). */
 const WRITE_CONTROLS = /^(Add room|Add logger|Add a logger here|Edit|Delete|Record move|Send invitation|Create token|Save nursery|Remove|Revoke)$/;
@@ -23,14 +23,14 @@ describe.each(WIDTHS)('a viewer at %i px wide', (width) => {
     await visible(heading(page, 'North garage'));
     await visible(page.getByRole('link', { name: 'K-02' }));
     expect(await writeControls().count()).toBe(0);
-    await screenshot(page, 'viewer-room-detail');
+    await recordPage(page, 'viewer-room-detail');
 
     await page.getByRole('link', { name: 'K-02' }).click();
     await visible(heading(page, 'K-02'));
     await visible(page.getByRole('heading', { name: 'Placement history' }));
     expect(await page.getByRole('heading', { name: 'Move' }).count()).toBe(0);
     expect(await writeControls().count()).toBe(0);
-    await screenshot(page, 'viewer-logger-detail');
+    await recordPage(page, 'viewer-logger-detail');
 
     await sectionNav(page).getByRole('link', { name: 'Loggers' }).click();
     await visible(page.getByRole('link', { name: 'K-05' }));
@@ -40,7 +40,7 @@ describe.each(WIDTHS)('a viewer at %i px wide', (width) => {
     await visible(page.getByText('America/Chicago'));
     expect(await page.getByRole('textbox').count()).toBe(0);
     expect(await writeControls().count()).toBe(0);
-    await screenshot(page, 'viewer-settings');
+    await recordPage(page, 'viewer-settings');
     expect(problems).toEqual([]);
     await page.close();
   });

@@ -72,12 +72,16 @@ export async function openPage(browser: Browser, width: number): Promise<Watched
   return { page, problems, expect: (failure) => expected.push(failure) };
 }
 
-export async function screenshot(page: Page, name: string): Promise<void> {
+async function screenshot(page: Page, name: string): Promise<void> {
   await mkdir(SCREENSHOT_DIR, { recursive: true });
-  const width = page.viewportSize()?.width ?? 0;
   // Fonts are bundled and load from the same server; wait for them so the picture shows the real type.
   await page.evaluate(() => document.fonts.ready);
-  await page.screenshot({ path: join(SCREENSHOT_DIR, `${name}-${width}.png`), fullPage: true });
+  // A full-page capture leaves sticky bars where the viewport ended; growing the viewport to the page shows them in place.
+  const viewport = page.viewportSize()!;
+  const height = await page.evaluate(() => document.documentElement.scrollHeight);
+  await page.setViewportSize({ width: viewport.width, height: Math.max(height, viewport.height) });
+  await page.screenshot({ path: join(SCREENSHOT_DIR, `${name}-${viewport.width}.png`) });
+  await page.setViewportSize(viewport);
 }
 
 /** Waits until the locator is visible; playwright-core has no expect(), and a timeout here names what was missing. */
@@ -88,3 +92,32 @@ export async function visible(locator: Locator): Promise<Locator> {
 
 export const heading = (page: Page, name: string | RegExp) => page.getByRole('heading', { level: 1, name });
 export const sectionNav = (page: Page) => page.getByRole('navigation', { name: 'Sections' });
+
+interface AxeViolation {
+  id: string;
+  help: string;
+  nodes: { target: string[] }[];
+}
+
+/**
+ * Runs axe-core (Deque's engine for the WCAG 2.1 A and AA success criteria) in the page and fails on any violation,
+ * naming the rule and the elements, so contrast, labels and landmarks are checked against the standard, not by eye.
+ */
+export async function assertAccessible(page: Page): Promise<void> {
+  const { default: axe } = await import('axe-core');
+  await page.evaluate(axe.source);
+  const violations = await page.evaluate(async () => {
+    const result = await (window as unknown as { axe: { run(ctx: Document, opts: object): Promise<{ violations: AxeViolation[] }> } }).axe.run(document, {
+      runOnly: { type: 'tag', values: ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa'] },
+    });
+    return result.violations.map((v) => ({ id: v.id, help: v.help, nodes: v.nodes.map((n) => ({ target: n.target })) }));
+  });
+  const summary = violations.map((v) => `${v.id}: ${v.help} — ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`);
+  if (summary.length) throw new Error(`Accessibility violations on ${page.url()}:\n${summary.join('\n')}`);
+}
+
+/** Every page a test visits on purpose is photographed for review and checked against WCAG by axe. */
+export async function recordPage(page: Page, name: string): Promise<void> {
+  await screenshot(page, name);
+  await assertAccessible(page);
+}
