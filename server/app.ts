@@ -17,9 +17,11 @@ import { importRoutes } from './imports/imports.routes';
 import { loggerRoutes } from './loggers/loggers.routes';
 import type { Mailer } from './mail/mailer';
 import { nurseryRoutes } from './nurseries/nurseries.routes';
+import { overviewRoutes } from './overview/overview.routes';
 import { profileRoutes } from './profiles/profiles.routes';
 import { roomRoutes } from './rooms/rooms.routes';
 import { seasonRoutes } from './season/season.routes';
+import { seriesRoutes } from './series/series.routes';
 import { systemRoutes } from './system/system.routes';
 import { tokenRoutes } from './tokens/tokens.routes';
 import { userRoutes } from './users/users.routes';
@@ -60,6 +62,8 @@ export function createApp(deps: AppDeps): { app: Express; routes: RouteInfo[] } 
     ...profileRoutes(),
     ...batchRoutes(sequelize),
     ...exposureRoutes(deps.pool),
+    ...seriesRoutes(deps.pool),
+    ...overviewRoutes(deps.pool),
     ...seasonRoutes(sequelize, deps.pool),
   ]);
   app.use('/api', originGuard(config.appOrigin), authenticate(config.jwtSecret), router);

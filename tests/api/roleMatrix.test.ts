@@ -113,6 +113,15 @@ const CASES: Record<string, Case> = {
   'POST /api/batches/:id/plant-out': { prepare: async (o) => ({ path: `/api/batches/${await newBatch(o)}/plant-out`, body: {} }), ok: 200 },
   'GET /api/batches/:id/exposure': { prepare: async (o) => ({ path: `/api/batches/${await newBatch(o)}/exposure` }), ok: 200 },
   'GET /api/exposure/batches': { prepare: async () => ({ path: '/api/exposure/batches' }), ok: 200 },
+  'GET /api/rooms/:id/series': {
+    prepare: async (o) => ({ path: `/api/rooms/${await firstId(o, '/api/rooms')}/series?from=2026-11-02T00:00:00Z&to=2026-11-09T00:00:00Z&width=300` }),
+    ok: 200,
+  },
+  'GET /api/rooms/:id/daily': {
+    prepare: async (o) => ({ path: `/api/rooms/${await firstId(o, '/api/rooms')}/daily?from=2026-11-02T00:00:00Z&to=2026-11-09T00:00:00Z` }),
+    ok: 200,
+  },
+  'GET /api/overview': { prepare: async () => ({ path: '/api/overview' }), ok: 200 },
   'GET /api/batches/:id/outcome': { prepare: async (o) => ({ path: `/api/batches/${(await newPlanting(o)).batchId}/outcome` }), ok: 200 },
   'POST /api/batches/:id/plantings': {
     prepare: async (o) => ({ path: `/api/batches/${await newBatch(o)}/plantings`, body: { plantedOn: daysAgo(1), count: 2, location: 'Matrix bed' } }),

@@ -4,6 +4,7 @@ import * as apiTokens from './002-api-tokens';
 import * as readingsImports from './003-readings-imports';
 import * as batchesProfiles from './004-batches-profiles';
 import * as season from './006-season';
+import * as readingBlocks from './007-reading-blocks';
 
 export interface Migration {
   name: string;
@@ -18,4 +19,5 @@ export const migrations: Migration[] = [
   { name: '003-readings-imports', ...readingsImports },
   { name: '004-batches-profiles', ...batchesProfiles },
   { name: '006-season', ...season },
+  { name: '007-reading-blocks', ...readingBlocks },
 ];

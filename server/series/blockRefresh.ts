@@ -1,0 +1,123 @@
+import type { Pool, PoolConnection } from 'mariadb';
+import { createBlockFolder } from '../../shared/series/blocks';
+import { BLOCK_MINUTES } from '../../shared/series/bucketGrid';
+import { replaceBlocks, type BlockSet, type Quantity } from './blockStore';
+import { streamRaw, type HalfOpen } from './rawReadings';
+
+const MINUTE = 60_000;
+/** Rebuilds cover whole blocks of the largest size, which every smaller size divides. */
+const REBUILD_GRAIN = Math.max(...BLOCK_MINUTES) * MINUTE;
+/**
+ * An import still "running" after this long died with its process; its transaction was rolled back, so it stored
+ * nothing and must not hold the mark back for ever. A year of one-minute readings imports in seconds.
+ */
+const DEAD_IMPORT_MS = 60 * MINUTE;
+
+interface ImportRow {
+  id: number;
+  status: 'running' | 'completed' | 'failed';
+  firstMs: number | null;
+  lastMs: number | null;
+  startedMs: number;
+}
+
+interface Work {
+  spans: HalfOpen[];
+  /** The mark may move up to here: every import up to this id is either included or stored nothing. */
+  through: number;
+}
+
+async function markOf(conn: Pool | PoolConnection, loggerId: number): Promise<number> {
+  const [row] = (await conn.query('SELECT through_import_id AS id FROM reading_block_marks WHERE logger_id = ?', [loggerId])) as { id: number }[];
+  return row?.id ?? 0;
+}
+
+async function importsAfter(conn: Pool | PoolConnection, loggerId: number, mark: number): Promise<ImportRow[]> {
+  return (await conn.query(
+    `SELECT id, status,
+            CAST(UNIX_TIMESTAMP(first_at) * 1000 AS SIGNED) AS firstMs, CAST(UNIX_TIMESTAMP(last_at) * 1000 AS SIGNED) AS lastMs,
+            CAST(UNIX_TIMESTAMP(started_at) * 1000 AS SIGNED) AS startedMs
+       FROM imports WHERE logger_id = ? AND id > ? ORDER BY id`,
+    [loggerId, mark],
+  )) as ImportRow[];
+}
+
+/** Whole rebuild grains around each import's span, overlapping stretches merged. */
+function planWork(imports: readonly ImportRow[], mark: number, now: number): Work {
+  const spans: HalfOpen[] = [];
+  let through = mark;
+  let held = false;
+  for (const i of imports) {
+    // Its readings may be committing right now and its span is not written yet: include it on a later request.
+    if (i.status === 'running' && now - i.startedMs < DEAD_IMPORT_MS) {
+      held = true;
+      continue;
+    }
+    if (i.status === 'completed' && i.firstMs !== null && i.lastMs !== null) {
+      spans.push({ from: Math.floor(i.firstMs / REBUILD_GRAIN) * REBUILD_GRAIN, to: (Math.floor(i.lastMs / REBUILD_GRAIN) + 1) * REBUILD_GRAIN });
+    }
+    if (!held) through = i.id;
+  }
+  spans.sort((a, b) => a.from - b.from);
+  const merged: HalfOpen[] = [];
+  for (const s of spans) {
+    const last = merged.at(-1);
+    if (last && s.from <= last.to) last.to = Math.max(last.to, s.to);
+    else merged.push({ ...s });
+  }
+  return { spans: merged, through };
+}
+
+/** Every block size of both quantities from one pass over the stretch's readings. */
+async function rebuild(conn: PoolConnection, loggerId: number, span: HalfOpen): Promise<void> {
+  const folders = (['c', 'rh'] as Quantity[]).flatMap((quantity) =>
+    BLOCK_MINUTES.map((minutes) => ({ quantity, minutes, folder: createBlockFolder(minutes * MINUTE) })),
+  );
+  const [cFolders, rhFolders] = [folders.filter((f) => f.quantity === 'c'), folders.filter((f) => f.quantity === 'rh')];
+  await streamRaw(conn, loggerId, span, ([t, c, rh]) => {
+    for (const f of cFolders) f.folder.push({ t, v: c });
+    if (rh !== null) for (const f of rhFolders) f.folder.push({ t, v: rh });
+  });
+  const sets: BlockSet[] = folders.map((f) => ({ quantity: f.quantity, minutes: f.minutes, blocks: f.folder.finish() }));
+  await replaceBlocks(conn, loggerId, span, sets);
+}
+
+/**
+ * Brings a logger's stored blocks up to date with its readings before they are read. Every reading arrives with
+ * an import record naming its logger and span (the importer and the demo seed both write one), so the imports
+ * after the logger's mark say exactly which stretches changed. Rebuilding holds a per-logger lock, so two requests
+ * never rebuild the same stretch at once, and the blocks and the mark move together in one transaction.
+ */
+export async function ensureBlocksCurrent(pool: Pool, loggerId: number, now = Date.now()): Promise<void> {
+  const mark = await markOf(pool, loggerId);
+  const pending = await importsAfter(pool, loggerId, mark);
+  if (pending.length === 0) return;
+  const conn = await pool.getConnection();
+  const lock = `coldknit:blocks:logger:${loggerId}`;
+  try {
+    await conn.query('SELECT GET_LOCK(?, 60)', [lock]);
+    try {
+      // Another request may have done the work while this one waited for the lock.
+      const current = await markOf(conn, loggerId);
+      const work = planWork(await importsAfter(conn, loggerId, current), current, now);
+      await conn.beginTransaction();
+      try {
+        for (const span of work.spans) await rebuild(conn, loggerId, span);
+        if (work.through > current) {
+          await conn.query(
+            'INSERT INTO reading_block_marks (logger_id, through_import_id) VALUES (?, ?) ON DUPLICATE KEY UPDATE through_import_id = VALUES(through_import_id)',
+            [loggerId, work.through],
+          );
+        }
+        await conn.commit();
+      } catch (err) {
+        await conn.rollback();
+        throw err;
+      }
+    } finally {
+      await conn.query('SELECT RELEASE_LOCK(?)', [lock]);
+    }
+  } finally {
+    conn.release();
+  }
+}
