@@ -91,6 +91,22 @@ describe.each(WIDTHS)('an owner at %i px wide', (width) => {
     await page.getByRole('link', { name: room }).click();
     await visible(page.getByRole('heading', { name: 'Loggers here before' }));
     await recordPage(page, 'room-detail');
+
+    await page.getByRole('link', { name: 'Edit' }).click();
+    await visible(heading(page, `Edit ${room}`));
+    await page.getByLabel('Notes').fill('Stone walls. The door sticks in a frost.');
+    await page.getByRole('button', { name: 'Save changes' }).click();
+    await visible(heading(page, room));
+    await visible(page.getByText('The door sticks in a frost.'));
+
+    // A room with logger history keeps it: the server refuses the delete and the page says why.
+    const roomId = new URL(page.url()).pathname.split('/').pop();
+    tolerate({ status: 409, path: `/api/rooms/${roomId}` });
+    await page.getByRole('button', { name: 'Delete' }).click();
+    await page.getByRole('button', { name: 'Delete room' }).click();
+    await visible(page.getByRole('alert').filter({ hasText: 'has logger history' }));
+    await page.getByRole('button', { name: 'Keep it' }).click();
+    await visible(page.getByRole('button', { name: 'Delete' }));
     await sectionNav(page).getByRole('link', { name: 'Loggers' }).click();
     await visible(heading(page, 'Loggers'));
     await visible(page.getByRole('link', { name: label }));

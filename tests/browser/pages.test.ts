@@ -70,4 +70,30 @@ describe.each(WIDTHS)('the remaining pages at %i px wide', (width) => {
     expect(problems).toEqual([]);
     await page.close();
   });
+
+  it('is usable from the keyboard: skip link, account menu, focus back on Escape', async () => {
+    const t = suite.app();
+    const { page, problems } = await openPage(suite.browser(), width);
+    await signInWithForm(page, t.origin, 'viewer@example.com');
+    await page.goto(`${t.origin}/loggers`);
+    await visible(heading(page, 'Loggers'));
+    await page.keyboard.press('Tab');
+    const skip = page.getByRole('link', { name: 'Skip to content' });
+    await visible(skip);
+    expect(await skip.evaluate((el) => el === document.activeElement)).toBe(true);
+    await page.keyboard.press('Enter');
+    expect(await page.evaluate(() => document.activeElement?.id)).toBe('main');
+
+    const menuButton = page.getByRole('button', { name: /account menu/ });
+    await menuButton.focus();
+    await page.keyboard.press('Enter');
+    expect(await menuButton.getAttribute('aria-expanded')).toBe('true');
+    await visible(page.getByRole('button', { name: 'Sign out' }));
+    await page.keyboard.press('Escape');
+    expect(await menuButton.getAttribute('aria-expanded')).toBe('false');
+    expect(await menuButton.evaluate((el) => el === document.activeElement)).toBe(true);
+    expect(await page.getByRole('button', { name: 'Sign out' }).isVisible()).toBe(false);
+    expect(problems).toEqual([]);
+    await page.close();
+  });
 });
