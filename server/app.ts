@@ -5,6 +5,7 @@ import express, { type Express } from 'express';
 import helmet from 'helmet';
 import type { Pool } from 'mariadb';
 import type { Sequelize } from 'sequelize';
+import { alertRoutes } from './alerts/alerts.routes';
 import { authenticate } from './auth/authenticate';
 import { authRoutes } from './auth/auth.routes';
 import { batchRoutes } from './batches/batches.routes';
@@ -62,6 +63,7 @@ export function createApp(deps: AppDeps): { app: Express; routes: RouteInfo[] } 
     ...profileRoutes(),
     ...batchRoutes(sequelize),
     ...exposureRoutes(deps.pool),
+    ...alertRoutes(sequelize),
     ...seriesRoutes(deps.pool),
     ...overviewRoutes(deps.pool),
     ...seasonRoutes(sequelize, deps.pool),

@@ -1,4 +1,5 @@
 import { join } from 'node:path';
+import { startAlerting } from './alerts/alerting';
 import { createApp } from './app';
 import { loadConfig } from './config';
 import { createMigrator } from './db/migrator';
@@ -18,6 +19,10 @@ async function main() {
   const capture = config.smtpUrl ? null : await startCaptureServer({ dir: config.devMailDir });
   const mailer = createMailer(config.smtpUrl ?? capture!.url, config.mailFrom);
   const { app } = createApp({ config, sequelize, pool: db.pool, mailer, clientDir: join(import.meta.dirname, '..', 'dist') });
+  // Alerts: evaluation after imports and every 10 minutes, and the outbox sender; a first round now catches up on
+  // whatever happened while the server was down.
+  const alerting = startAlerting({ sequelize, pool: db.pool, mailer, appOrigin: config.appOrigin });
+  alerting.schedule.tick().catch((err: unknown) => console.error(`alerts: first round failed: ${String(err)}`));
 
   const server = app.listen(config.port, config.host, () => {
     console.log(`\nColdknit is running at ${config.appOrigin}`);
@@ -31,8 +36,14 @@ async function main() {
   const stop = () => {
     server.close();
     server.closeAllConnections();
-    mailer.close();
-    void Promise.all([capture?.close(), db.close()]).then(() => process.exit(0));
+    // The sender finishes the message in hand before the mailer and the database close under it.
+    void alerting
+      .stop()
+      .then(() => {
+        mailer.close();
+        return Promise.all([capture?.close(), db.close()]);
+      })
+      .then(() => process.exit(0));
   };
   process.once('SIGINT', stop);
   process.once('SIGTERM', stop);

@@ -5,6 +5,8 @@ export interface OutgoingMail {
   subject: string;
   text: string;
   html: string;
+  /** A fixed Message-ID ("<id@host>"), so a resent message is recognisably the same one; nodemailer makes one otherwise. */
+  messageId?: string;
 }
 
 export interface Mailer {

@@ -35,7 +35,10 @@ interface Judging {
   /** The readings that can decide the finding; their instants are where the condition is judged. */
   series: Reading[][];
   judgeAt: (t: number) => Verdict | null;
+  /** How long the condition must hold before the finding fires. */
   holdMs: number;
+  /** How long it must have been false before the finding clears; the hold time when not given. */
+  clearMs?: number;
   /** Beyond this age the newest reading no longer tells how things are now. */
   staleMs: number;
   monotone?: boolean;
@@ -57,7 +60,7 @@ function judgeSubject(subject: Subject, batches: readonly BatchFacts[], judging:
   if (now - asOf > judging.staleMs) return unknown(asOf, latest.detail);
   const instants = recent.filter((t) => t >= asOf - SINCE_HORIZON_HOURS * MS_PER_HOUR);
   const held = heldState(instants, (t) => (t === asOf ? latest.holds : (judging.judgeAt(t)?.holds ?? false)), { monotone: judging.monotone })!;
-  const state = isSettled(held, judging.holdMs) ? (held.holds ? 'firing' : 'clear') : 'settling';
+  const state = isSettled(held, held.holds ? judging.holdMs : (judging.clearMs ?? judging.holdMs)) ? (held.holds ? 'firing' : 'clear') : 'settling';
   return {
     ...subject,
     state,
@@ -90,8 +93,9 @@ function roomFindings(room: RoomSnapshot, overrides: ThresholdOverrides, now: nu
   if (coldStored.length) {
     const limitC = Math.min(...coldStored.map((b) => b.storageMaxC!));
     findings.push(
+      // Warm for the storage time before it fires; back under the limit for the ordinary hold before it clears.
       judgeSubject(subject('storage_warm'), coldStored, {
-        series, staleMs, holdMs: th.storageWarmMinutes * MS_PER_MINUTE,
+        series, staleMs, holdMs: th.storageWarmMinutes * MS_PER_MINUTE, clearMs: th.holdMinutes * MS_PER_MINUTE,
         judgeAt: (t) => judgeStorageAt(room.loggers, t, limitC),
       }, now),
     );

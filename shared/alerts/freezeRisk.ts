@@ -50,6 +50,7 @@ function judgeLogger(series: LoggerSeries, t: number, p: FreezeParams): LoggerVe
     loggerLabel: series.label,
     limitC: p.limitC,
     trendCPerHour: trend ? trend.slopeCPerHour : null,
+    windowHours: p.trendHours,
     reachesAt: forecast ? reachesAt : null,
     cause: atOrBelow ? 'at_or_below' : forecast ? 'trend' : undefined,
   };

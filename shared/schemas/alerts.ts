@@ -22,9 +22,17 @@ export const nurseryThresholdsShape = roomThresholdsShape.extend({
 export type RoomThresholds = z.infer<typeof roomThresholdsShape>;
 export type AlertThresholds = z.infer<typeof nurseryThresholdsShape>;
 
-/** Stored settings are overrides: a key left out falls back to the nursery's value, then to the default. */
-export const nurseryThresholdsBody = nurseryThresholdsShape.partial().strict();
-export const roomThresholdsBody = roomThresholdsShape.partial().strict();
+/**
+ * Stored settings are overrides: a key not stored falls back to the nursery's value, then to the default. A change
+ * sets some keys and resets others to inherit again (null cannot mean "inherit": it switches the budget off).
+ */
+function overridesPatch<S extends z.ZodObject>(shape: S) {
+  const keys = Object.keys(shape.shape) as [string, ...string[]];
+  return z.object({ set: shape.partial().strict().default({}), reset: z.array(z.enum(keys)).default([]) }).strict();
+}
+export const nurseryThresholdsPatch = overridesPatch(nurseryThresholdsShape);
+export const roomThresholdsPatch = overridesPatch(roomThresholdsShape);
+export type ThresholdsPatch = z.input<typeof nurseryThresholdsPatch>;
 
 export const ALERT_STATUSES = ['open', 'acknowledged', 'resolved'] as const;
 export type AlertStatus = (typeof ALERT_STATUSES)[number];

@@ -2,6 +2,8 @@ import request from 'supertest';
 import type TestAgent from 'supertest/lib/agent';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { ROLE_RANK, type Role } from '../../shared/schemas/common';
+import { Alert } from '../../server/alerts/alert.model';
+import { User } from '../../server/users/user.model';
 import { signIn, startTestApp, type TestApp } from '../support/testApp';
 
 type Who = 'anonymous' | Role;
@@ -138,6 +140,19 @@ const CASES: Record<string, Case> = {
   'GET /api/seasons': { prepare: async () => ({ path: '/api/seasons' }), ok: 200 },
   'GET /api/seasons/:season/report': { prepare: async () => ({ path: '/api/seasons/2026/report' }), ok: 200 },
   'GET /api/seasons/:season/export': { prepare: async () => ({ path: '/api/seasons/2026/export' }), ok: 200 },
+  'GET /api/alerts': { prepare: async () => ({ path: '/api/alerts?status=open' }), ok: 200 },
+  'GET /api/alerts/summary': { prepare: async () => ({ path: '/api/alerts/summary' }), ok: 200 },
+  'GET /api/alerts/:id': { prepare: async () => ({ path: `/api/alerts/${await openAlert()}` }), ok: 200 },
+  'POST /api/alerts/:id/acknowledge': { prepare: async () => ({ path: `/api/alerts/${await openAlert()}/acknowledge` }), ok: 200 },
+  'GET /api/alert-settings': { prepare: async () => ({ path: '/api/alert-settings' }), ok: 200 },
+  'PATCH /api/alert-settings': { prepare: async () => ({ path: '/api/alert-settings', body: { set: { holdMinutes: 15 } } }), ok: 200 },
+  'PATCH /api/alert-settings/rooms/:id': {
+    prepare: async (o) => ({ path: `/api/alert-settings/rooms/${await firstId(o, '/api/rooms')}`, body: { set: { silentHours: 30 } } }),
+    ok: 200,
+  },
+  'DELETE /api/alert-settings/rooms/:id': { prepare: async (o) => ({ path: `/api/alert-settings/rooms/${await firstId(o, '/api/rooms')}` }), ok: 204 },
+  'GET /api/alert-subscriptions': { prepare: async () => ({ path: '/api/alert-subscriptions' }), ok: 200 },
+  'PATCH /api/alert-subscriptions': { prepare: async () => ({ path: '/api/alert-subscriptions', body: { daily_digest: 'off' } }), ok: 200 },
 };
 
 const SESSION_CHANGING = new Set(['/api/auth/login', '/api/auth/logout', '/api/auth/signup']);
@@ -155,6 +170,17 @@ async function invitedUser(owner: Agent) {
   const token = /\/invite\/([A-Za-z0-9_-]+)/.exec(mail.text)![1];
   await request(t.app).post(`/api/invitations/token/${token}/accept`).send({ name: 'Temp', password: 'long-enough-pass' });
   return userId(owner, email);
+}
+
+/** An open alert in the demo nursery. No route opens one (the evaluator does), so it is written directly. */
+async function openAlert() {
+  const { nurseryId } = (await User.findOne({ where: { email: 'owner@example.com' } }))!;
+  const now = new Date();
+  const alert = await Alert.create({
+    nurseryId, rule: 'silent_logger', subjectKind: 'logger', subjectId: ++seq, subjectName: 'Matrix logger', roomId: null,
+    severity: 'warning', status: 'open', since: now, openedAt: now, detail: {}, checkedAt: now,
+  });
+  return alert.id;
 }
 
 describe('role matrix: every route × every role', () => {

@@ -48,6 +48,13 @@ describe('too warm for cold storage', () => {
     expect(pick(later, 'storage_warm')).toMatchObject({ state: 'firing', severity: 'warning', since: warmFrom, detail: { limitC: 10, valueC: 11 } });
     expect(pick(evaluateNursery(nursery(room(readings, [walnut])), noOverrides, T0 + 5 * HOUR), 'storage_warm')).toBeUndefined();
   });
+
+  it('clears after the ordinary 15 min hold back under the limit, not after the 120 min it took to fire', () => {
+    const readings = [...sampled(T0, T0 + 3 * HOUR, () => 11), ...sampled(T0 + 3 * HOUR + 10 * MIN, T0 + 3 * HOUR + 30 * MIN, () => 6)];
+    expect(pick(evaluateNursery(nursery(room(readings)), noOverrides, T0 + 4 * HOUR), 'storage_warm')).toMatchObject({
+      state: 'clear', since: T0 + 3 * HOUR + 10 * MIN,
+    });
+  });
 });
 
 describe('outside the band', () => {

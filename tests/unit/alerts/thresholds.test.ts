@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { DEFAULT_THRESHOLDS, nurseryThresholds, thresholdsFor } from '../../../shared/alerts/thresholds';
-import { nurseryThresholdsBody, roomThresholdsBody } from '../../../shared/schemas/alerts';
+import { nurseryThresholdsPatch, roomThresholdsPatch } from '../../../shared/schemas/alerts';
 
 describe('thresholds', () => {
   it('defaults are the brief\'s: 15 min hold, 6 h trend, 12 h look-ahead, 6 h out of band, 26 h silence, 12 h reminder', () => {
@@ -22,10 +22,12 @@ describe('thresholds', () => {
     expect(thresholdsFor(overrides, 4).exposureBudgetDegreeHours).toBe(40);
   });
 
-  it('bodies refuse unknown keys, and a room cannot set the digest hour', () => {
-    expect(nurseryThresholdsBody.safeParse({ holdMinutes: 20, digestHour: 6 }).success).toBe(true);
-    expect(roomThresholdsBody.safeParse({ digestHour: 6 }).success).toBe(false);
-    expect(nurseryThresholdsBody.safeParse({ holdMinutes: -1 }).success).toBe(false);
-    expect(nurseryThresholdsBody.safeParse({ colour: 'red' }).success).toBe(false);
+  it('changes refuse unknown keys and out-of-range values, and a room cannot set or reset the digest hour', () => {
+    expect(nurseryThresholdsPatch.parse({ set: { holdMinutes: 20, digestHour: 6 } })).toEqual({ set: { holdMinutes: 20, digestHour: 6 }, reset: [] });
+    expect(nurseryThresholdsPatch.safeParse({ reset: ['silentHours'] }).success).toBe(true);
+    expect(roomThresholdsPatch.safeParse({ set: { digestHour: 6 } }).success).toBe(false);
+    expect(roomThresholdsPatch.safeParse({ reset: ['digestHour'] }).success).toBe(false);
+    expect(nurseryThresholdsPatch.safeParse({ set: { holdMinutes: -1 } }).success).toBe(false);
+    expect(nurseryThresholdsPatch.safeParse({ set: { colour: 'red' } }).success).toBe(false);
   });
 });
