@@ -1,8 +1,10 @@
+import { useRef } from 'react';
 import { NavLink, Outlet } from 'react-router-dom';
 import { useCurrentSession } from '../auth/useCurrentSession';
 import { Brand } from './Brand';
 import { NAV_ITEMS } from './navItems';
 import { SkipLink } from './SkipLink';
+import { useFocusOnNavigate } from './useFocusOnNavigate';
 import { UserMenu } from './UserMenu';
 
 const topLink = ({ isActive }: { isActive: boolean }) =>
@@ -16,6 +18,8 @@ const bottomLink = ({ isActive }: { isActive: boolean }) =>
  */
 export function AppFrame() {
   const { nursery } = useCurrentSession();
+  const main = useRef<HTMLElement>(null);
+  useFocusOnNavigate(main);
   return (
     <div className="flex min-h-dvh flex-col">
       <SkipLink />
@@ -37,7 +41,7 @@ export function AppFrame() {
           </div>
         </div>
       </header>
-      <main id="main" tabIndex={-1} className="mx-auto w-full max-w-6xl flex-1 px-4 py-6 focus:outline-none sm:py-8">
+      <main ref={main} id="main" tabIndex={-1} className="mx-auto w-full max-w-6xl flex-1 px-4 py-6 focus:outline-none sm:py-8">
         <Outlet />
       </main>
       <nav aria-label="Sections" className="sticky bottom-0 z-30 flex border-t border-slate bg-slate-deep md:hidden">

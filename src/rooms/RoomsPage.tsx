@@ -1,3 +1,4 @@
+import type { UseQueryResult } from '@tanstack/react-query';
 import { Link } from 'react-router-dom';
 import { useRoleAtLeast } from '../auth/useCurrentSession';
 import { useLoggers, type Logger } from '../loggers/queries';
@@ -11,9 +12,11 @@ import { roomKindLabel } from './roomKinds';
 
 const link = 'font-semibold text-slate underline underline-offset-4 hover:text-slate-deep';
 
-function loggerCount(loggers: Logger[] | undefined, roomId: number): string {
-  if (!loggers) return '…';
-  return String(loggers.filter((l) => l.roomId === roomId).length);
+/** The count needs the loggers list, which loads beside the rooms; "…" while it comes, "—" if it could not. */
+function loggerCount(loggers: UseQueryResult<Logger[]>, roomId: number): string {
+  if (loggers.isError) return '—';
+  if (!loggers.data) return '…';
+  return String(loggers.data.filter((l) => l.roomId === roomId).length);
 }
 
 export function RoomsPage() {
@@ -38,7 +41,7 @@ export function RoomsPage() {
               columns={[
                 { header: 'Name', cell: (r) => <Link to={`/rooms/${r.id}`} className={link}>{r.name}</Link> },
                 { header: 'Kind', cell: (r) => roomKindLabel(r.kind) },
-                { header: 'Loggers', cell: (r) => loggerCount(loggers.data, r.id), figure: true },
+                { header: 'Loggers', cell: (r) => loggerCount(loggers, r.id), figure: true },
                 { header: 'Notes', cell: (r) => <span className="line-clamp-2 text-ink-soft">{r.notes || '—'}</span> },
               ]}
             />

@@ -2,7 +2,7 @@ import request from 'supertest';
 import { describe, expect, it } from 'vitest';
 import { openAccountMenu, signInWithForm, signOut } from './support/actions';
 import { useBrowserSuite } from './support/browserApp';
-import { heading, openPage, recordPage, visible, WIDTHS } from './support/browser';
+import { heading, openPage, recordPage, sectionNav, visible, WIDTHS } from './support/browser';
 
 const suite = useBrowserSuite();
 
@@ -93,6 +93,11 @@ describe.each(WIDTHS)('the remaining pages at %i px wide', (width) => {
     expect(await menuButton.getAttribute('aria-expanded')).toBe('false');
     expect(await menuButton.evaluate((el) => el === document.activeElement)).toBe(true);
     expect(await page.getByRole('button', { name: 'Sign out' }).isVisible()).toBe(false);
+
+    // Following a section link moves focus to the new page's content, as a full page load would.
+    await sectionNav(page).getByRole('link', { name: 'Rooms' }).press('Enter');
+    await visible(heading(page, 'Rooms'));
+    await page.waitForFunction(() => document.activeElement?.id === 'main');
     expect(problems).toEqual([]);
     await page.close();
   });
