@@ -4,7 +4,8 @@ import { ImportError } from './importError';
 /**
  * Turns wall-clock times written without an offset into UTC, for one zone. Zone rules come from the
  * IANA tz database as Node's ICU ships it, read through luxon. Offsets are looked up once per local day
- * (a day with no change nearby has one offset throughout), so a million rows cost a few thousand look-ups.
+ * (a day with no change nearby has one offset throughout) and each change is pinned down once, so a
+ * million rows cost a few thousand look-ups.
  */
 export interface LocalTimeResolver {
   /** "Europe/Berlin" or "+01:00". */
@@ -17,7 +18,6 @@ export interface LocalTimeResolver {
 }
 
 const MINUTE = 60_000;
-const HOUR = 3_600_000;
 const DAY = 86_400_000;
 
 export function createLocalTimeResolver(zone: string, order: 'ascending' | 'descending'): LocalTimeResolver {
@@ -53,6 +53,13 @@ function offsetName(minutes: number): string {
   return `${minutes < 0 ? '-' : '+'}${two(Math.floor(size / 60))}:${two(size % 60)}`;
 }
 
+/** One change of offset: before it (UTC ms < at) the zone is `before` minutes east of UTC, from it on `after`. */
+interface OffsetChange {
+  at: number;
+  before: number;
+  after: number;
+}
+
 class IanaResolver implements LocalTimeResolver {
   readonly zoneName: string;
   private readonly zone: IANAZone;
@@ -60,10 +67,10 @@ class IanaResolver implements LocalTimeResolver {
   private cachedDay = Number.NaN;
   /** Offset in minutes for every time of the cached local day, or NaN when a change falls near it. */
   private cachedDayOffset = Number.NaN;
+  /** The change near the cached day, when there is one. */
+  private change: OffsetChange | null = null;
   /** Offsets at UTC midnights, each asked of the zone once (a day's check shares them with its neighbours). */
   private readonly midnightOffsets = new Map<number, number>();
-  private cachedHour = Number.NaN;
-  private cachedHourOffset = Number.NaN;
 
   constructor(zone: IANAZone, order: 'ascending' | 'descending') {
     this.zone = zone;
@@ -76,21 +83,16 @@ class IanaResolver implements LocalTimeResolver {
     if (day !== this.cachedDay) {
       this.cachedDay = day;
       this.cachedDayOffset = this.steadyOffset(day);
+      if (Number.isNaN(this.cachedDayOffset)) this.change = this.findChange(day);
     }
     if (!Number.isNaN(this.cachedDayOffset)) return localMs - this.cachedDayOffset * MINUTE;
-    // Near a change, an hour that starts and ends on the same single offset has it throughout.
-    const hour = Math.floor(localMs / HOUR);
-    if (hour !== this.cachedHour) {
-      this.cachedHour = hour;
-      const start = this.validOffsets(hour * HOUR);
-      const end = this.validOffsets((hour + 1) * HOUR - 1);
-      this.cachedHourOffset = start.length === 1 && end.length === 1 && start[0] === end[0] ? start[0] : Number.NaN;
-    }
-    if (!Number.isNaN(this.cachedHourOffset)) return localMs - this.cachedHourOffset * MINUTE;
-    return this.nearChange(localMs, previousUtc);
+    return this.nearChange(localMs, previousUtc, this.change as OffsetChange);
   }
 
-  /** The offset of a local day when the zone keeps one offset from a day before it to a day after it. */
+  /**
+   * The offset of a local day when the zone keeps one offset from a day before it to two days after
+   * (a local day lies within that span of UTC whatever the offset).
+   */
   private steadyOffset(day: number): number {
     const before = this.offsetAtMidnight(day - 1);
     const after = this.offsetAtMidnight(day + 2);
@@ -107,23 +109,37 @@ class IanaResolver implements LocalTimeResolver {
   }
 
   /**
-   * Offsets under which a local time exists: none in the spring gap, two in the repeated autumn hour.
-   * Any offset in force within a day either side is a candidate (zones change at most once in that span).
+   * Finds the instant of the change in that three-day span by bisection to the millisecond (about 28
+   * look-ups per change); zones change at most once in three days. After that, every local time near the
+   * change is resolved by arithmetic.
    */
-  private validOffsets(localMs: number): number[] {
-    const candidates = new Set([this.offsetAt(localMs - DAY), this.offsetAt(localMs + DAY)]);
-    return [...candidates].filter((offset) => this.offsetAt(localMs - offset * MINUTE) === offset);
+  private findChange(day: number): OffsetChange {
+    if (this.change && this.change.at > (day - 1) * DAY && this.change.at <= (day + 2) * DAY) return this.change;
+    let low = (day - 1) * DAY;
+    let high = (day + 2) * DAY;
+    const before = this.offsetAtMidnight(day - 1);
+    const after = this.offsetAtMidnight(day + 2);
+    while (high - low > 1) {
+      const middle = Math.floor((low + high) / 2);
+      if (this.offsetAt(middle) === before) low = middle;
+      else high = middle;
+    }
+    return { at: high, before, after };
   }
 
-  private nearChange(localMs: number, previousUtc: number | null): number | string {
-    const valid = this.validOffsets(localMs);
-    if (valid.length === 0) {
+  /** Resolves a local time near a change: none in the spring gap, two in the repeated autumn hour. */
+  private nearChange(localMs: number, previousUtc: number | null, change: OffsetChange): number | string {
+    const asBefore = localMs - change.before * MINUTE;
+    const asAfter = localMs - change.after * MINUTE;
+    const validBefore = asBefore < change.at;
+    const validAfter = asAfter >= change.at;
+    if (!validBefore && !validAfter) {
       return `local time ${formatLocal(localMs)} does not exist in ${this.zoneName} (the clocks went forward then)`;
     }
-    if (valid.length === 1) return localMs - valid[0] * MINUTE;
+    if (!validBefore || !validAfter) return validBefore ? asBefore : asAfter;
     // The hour repeated when the clocks go back: take the reading that keeps the file in its order.
-    const earlier = localMs - Math.max(...valid) * MINUTE;
-    const later = localMs - Math.min(...valid) * MINUTE;
+    const earlier = Math.min(asBefore, asAfter);
+    const later = Math.max(asBefore, asAfter);
     if (previousUtc === null) return this.descending ? later : earlier;
     // The same local time again right after itself means the clocks went back in between.
     if (this.descending) return later < previousUtc ? later : earlier;

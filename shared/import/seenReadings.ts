@@ -1,8 +1,11 @@
+/** Entries per block: blocks are filled in turn and never copied (a doubling array copied and re-faulted ~2× the memory). */
+const BLOCK = 1 << 16;
+
 /**
  * Readings already accepted, looked up by time for duplicate and conflict checks. Logger files are
- * nearly always in time order, so readings that extend the series go to sorted typed arrays (binary
- * search, no per-entry objects); only readings that arrive out of order go to a Map. A Map alone for a
- * million rows cost more than the rest of the row handling together (measured).
+ * nearly always in time order, so readings that extend the series go to sorted typed-array blocks
+ * (binary search, no per-entry objects); only readings that arrive out of order go to a Map. A Map alone
+ * for a million rows cost more than the rest of the row handling together (measured).
  */
 export class SeenReadings {
   /** Filled by find(): the earlier reading with the same time. */
@@ -10,27 +13,24 @@ export class SeenReadings {
   foundRh = Number.NaN;
   foundLine = 0;
 
-  private times = new Float64Array(4096);
-  private values = new Float64Array(4096 * 3);
+  private readonly timeBlocks: Float64Array[] = [];
+  /** c, rh and line of each entry, three numbers apiece, block by block. */
+  private readonly valueBlocks: Float64Array[] = [];
   private size = 0;
+  private latest = -Infinity;
   private readonly outOfOrder = new Map<number, [c: number, rh: number, line: number]>();
 
   /** Looks for a reading at time t; on success the found* fields hold it. */
   find(t: number): boolean {
-    if (this.size === 0 || t > this.times[this.size - 1]) return false;
-    let low = 0;
-    let high = this.size - 1;
-    while (low <= high) {
-      const middle = (low + high) >> 1;
-      const at = this.times[middle];
-      if (at === t) {
-        this.foundC = this.values[middle * 3];
-        this.foundRh = this.values[middle * 3 + 1];
-        this.foundLine = this.values[middle * 3 + 2];
-        return true;
-      }
-      if (at < t) low = middle + 1;
-      else high = middle - 1;
+    if (t > this.latest) return false;
+    const index = this.indexOf(t);
+    if (index >= 0) {
+      const values = this.valueBlocks[Math.floor(index / BLOCK)];
+      const at = (index % BLOCK) * 3;
+      this.foundC = values[at];
+      this.foundRh = values[at + 1];
+      this.foundLine = values[at + 2];
+      return true;
     }
     const other = this.outOfOrder.get(t);
     if (other === undefined) return false;
@@ -40,24 +40,36 @@ export class SeenReadings {
 
   /** Adds a reading not found before; `rh` is NaN when there is none. */
   add(t: number, c: number, rh: number, line: number): void {
-    if (this.size > 0 && t < this.times[this.size - 1]) {
+    if (t < this.latest) {
       this.outOfOrder.set(t, [c, rh, line]);
       return;
     }
-    if (this.size === this.times.length) this.grow();
-    this.times[this.size] = t;
-    this.values[this.size * 3] = c;
-    this.values[this.size * 3 + 1] = rh;
-    this.values[this.size * 3 + 2] = line;
+    const offset = this.size % BLOCK;
+    if (offset === 0) {
+      this.timeBlocks.push(new Float64Array(BLOCK));
+      this.valueBlocks.push(new Float64Array(BLOCK * 3));
+    }
+    const block = this.timeBlocks.length - 1;
+    this.timeBlocks[block][offset] = t;
+    const values = this.valueBlocks[block];
+    values[offset * 3] = c;
+    values[offset * 3 + 1] = rh;
+    values[offset * 3 + 2] = line;
     this.size++;
+    this.latest = t;
   }
 
-  private grow(): void {
-    const times = new Float64Array(this.times.length * 2);
-    times.set(this.times);
-    const values = new Float64Array(this.values.length * 2);
-    values.set(this.values);
-    this.times = times;
-    this.values = values;
+  /** Binary search over the in-order entries; -1 when t is not among them. */
+  private indexOf(t: number): number {
+    let low = 0;
+    let high = this.size - 1;
+    while (low <= high) {
+      const middle = (low + high) >> 1;
+      const at = this.timeBlocks[Math.floor(middle / BLOCK)][middle % BLOCK];
+      if (at === t) return middle;
+      if (at < t) low = middle + 1;
+      else high = middle - 1;
+    }
+    return -1;
   }
 }

@@ -48,6 +48,16 @@ describe('every row accounted for', () => {
     expect(summary.span).toEqual({ first: utc('2025-02-10T00:00:00Z'), last: utc('2025-02-10T05:30:00Z') });
   });
 
+  it('finds duplicates and conflicts in a file that is not in time order', async () => {
+    const stamps = ['08:00', '09:00', '07:00', '08:30', '07:00', '08:30', '09:00', '06:00'];
+    const temps = ['1.0', '2.0', '3.0', '4.0', '3.0', '4.5', '2.0', '5.0'];
+    const text = ['Time,Temp °C', ...stamps.map((time, i) => `2025-02-10 ${time},${temps[i]}`)].join('\n');
+    const { summary, readings } = await readText(text);
+    expect(summary.rows).toEqual({ total: 8, accepted: 5, rejected: 0, duplicates: 2, conflicts: 1 });
+    expect(summary.conflictLines.map((note) => note.line)).toEqual([7]);
+    expect(readings.map((r) => r.line)).toEqual([2, 3, 4, 5, 9]);
+  });
+
   it('counts physical lines through a quoted field that spans lines (RFC 4180 §2.6)', async () => {
     const later = ['01:00', '01:30', '02:00', '02:30', '03:00'].map((time) => `2025-02-10 ${time},1.7,ok`);
     const { readings } = await readText(['Time,Temp °C,Note', '2025-02-10 00:00,1.5,"door', 'opened"', '2025-02-10 00:30,1.6,ok', ...later].join('\n'));
