@@ -37,7 +37,7 @@ async function lastDayExtremes(pool: Pool, week: readonly LoggerInRoom[], now: n
     for (const w of logger.windows) {
       const from = Math.max(w.from, now - DAY);
       if (w.to < from) continue;
-      for (const p of (await readPieces(pool, logger.loggerId, from, w.to, 60)).c) {
+      for (const p of (await readPieces(pool, logger.loggerId, from, w.to, 30)).c) {
         if (!low || p.min.v < low.c) low = { t: p.min.t, c: p.min.v, logger: logger.label };
         if (!high || p.max.v > high.c) high = { t: p.max.t, c: p.max.v, logger: logger.label };
       }

@@ -43,8 +43,8 @@ function extremesByDay(pieces: readonly Summary[], days: readonly Day[]): Map<st
 
 /**
  * The lowest and highest temperature of each logger in the room for each day of the nursery's calendar in
- * [from, to]: the table that stands beside the chart for people who cannot see it. Hourly blocks serve whole
- * hours; a block that a local midnight cuts (zones offset by a half or quarter hour) is read reading by reading.
+ * [from, to]: the table that stands beside the chart for people who cannot see it. 30-minute blocks serve whole
+ * half hours; a block that a local midnight cuts (zones offset by a quarter hour) is read reading by reading.
  */
 export async function dailyExtremes(pool: Pool, nurseryId: number, roomId: number, range: { from: Date; to: Date }) {
   const room = await findRoom(nurseryId, roomId);
@@ -57,7 +57,7 @@ export async function dailyExtremes(pool: Pool, nurseryId: number, roomId: numbe
   const perLogger = await Promise.all(
     loggers.map(async (logger) => {
       const pieces: Summary[] = [];
-      for (const w of logger.windows) pieces.push(...(await readPieces(pool, logger.loggerId, w.from, w.to, 60, cuts)).c);
+      for (const w of logger.windows) pieces.push(...(await readPieces(pool, logger.loggerId, w.from, w.to, 30, cuts)).c);
       return { logger, byDay: extremesByDay(pieces, days) };
     }),
   );

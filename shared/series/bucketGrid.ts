@@ -2,11 +2,18 @@
 
 const MINUTE = 60_000;
 
-/** Sizes of the stored block summaries, smallest first; each divides the next, and 60 min divides a day. */
-export const BLOCK_MINUTES = [10, 60] as const;
+/**
+ * Sizes of the stored block summaries, smallest first: each divides the next and the largest divides a day, and none
+ * exceeds the 180-minute join limit (so no block hides a break). Three times apart, a chart reads fewer than
+ * 9 blocks per bucket on any range the blocks serve.
+ */
+export const BLOCK_MINUTES = [10, 30, 90, 180] as const;
 export type BlockMinutes = (typeof BLOCK_MINUTES)[number];
 
-/** A block is used only when a bucket holds at least this many, so buckets stay within 3/4 of a pixel column's width. */
+/**
+ * A block size is used only when a bucket holds at least this many: a bucket is then less than one block wider than
+ * a pixel column, and a column holds over two blocks, so buckets stay narrower than 1.5 columns.
+ */
 const MIN_BLOCKS_PER_BUCKET = 3;
 
 /**
@@ -32,8 +39,8 @@ export function bucketMs(grid: BucketGrid): number {
 /**
  * For a chart `width` pixels wide over [from, to] (epoch ms, both included). Short ranges get exactly `width`
  * buckets, one per pixel column, as M4 prescribes. Long ranges get buckets made of whole stored blocks, aligned to
- * the block grid, so the server reads a few thousand block summaries instead of every reading; there are then at
- * most `width` buckets, each at most a third of a block wider than a column, and every extreme is still kept.
+ * the block grid, so the server reads a few thousand block summaries instead of every reading; there are then
+ * between 2/3 of `width` and `width` buckets, each with its true first, lowest, highest and last reading.
  */
 export function planBucketGrid(from: number, to: number, width: number): BucketGrid {
   if (!(Number.isSafeInteger(from) && Number.isSafeInteger(to) && to >= from)) throw new Error(`bad range [${from}, ${to}]`);

@@ -1,5 +1,5 @@
-// The day table beside the chart: lowest and highest per day of the nursery's calendar. A zone half an hour off UTC
-// puts each local midnight inside an hourly block; the days are checked against luxon's own calendar grouping.
+// The day table beside the chart: lowest and highest per day of the nursery's calendar. A zone a quarter hour off a
+// half hour (UTC+05:45) puts each local midnight inside a 30-minute block; the days are checked against luxon's own calendar grouping.
 import { DateTime } from 'luxon';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -9,7 +9,7 @@ import { roomWithLogger, storeReadings, type Row } from './storedReadings';
 const MINUTE = 60_000;
 const DAY = 24 * 60 * MINUTE;
 const START = Date.UTC(2026, 0, 5);
-const ZONE = 'Asia/Kolkata';
+const ZONE = 'Asia/Kathmandu';
 const iso = (t: number) => new Date(t).toISOString();
 /** Ten-minute readings with repeats, so ties must resolve to the earliest reading. */
 const reading = (i: number): Row => ({ t: START + i * 10 * MINUTE, c: ((i * 7919) % 113) / 10 - 3 });
@@ -22,7 +22,7 @@ describe(`daily extremes in ${ZONE}`, () => {
   beforeAll(async () => {
     t = await startTestApp({ seed: false });
     owner = request.agent(t.app);
-    const signup = await owner.post('/api/auth/signup').send({ nurseryName: 'Half Hour Grafts', name: 'Ravi Menon', email: 'ravi@example.org', password: 'a-long-passphrase', timeZone: ZONE });
+    const signup = await owner.post('/api/auth/signup').send({ nurseryName: 'Quarter Hour Grafts', name: 'Ravi Menon', email: 'ravi@example.org', password: 'a-long-passphrase', timeZone: ZONE });
     const placed = await roomWithLogger(owner, new Date(START));
     roomId = placed.roomId;
     await storeReadings(t.pool, signup.body.nursery.id, placed.loggerId, COUNT, reading);

@@ -17,12 +17,17 @@ describe('planBucketGrid', () => {
     expect(bucketIndex(grid, T0 + DAY - 1)).toBe(1199);
   });
 
-  it('a year on 1,200 px: 8-hour buckets of hourly blocks, aligned to the hour (1,096 buckets)', () => {
+  it('a year on 1,200 px: 9-hour buckets of 3-hour blocks, aligned to the block grid (974 buckets)', () => {
     const grid = planBucketGrid(T0, T0 + 365 * DAY - 1, 1200);
-    expect(grid.blockMinutes).toBe(60);
-    expect(bucketMs(grid)).toBe(8 * HOUR);
+    expect(grid.blockMinutes).toBe(180);
+    expect(bucketMs(grid)).toBe(9 * HOUR);
     expect(grid.origin).toBe(Date.UTC(2026, 10, 2, 6));
-    expect(grid.count).toBe(1096);
+    expect(grid.count).toBe(974);
+  });
+
+  it('a season of 150 days on 1,200 px: 4.5-hour buckets of 90-minute blocks, the coarsest case (800 buckets)', () => {
+    const grid = planBucketGrid(T0, T0 + 150 * DAY - 1, 1200);
+    expect([grid.blockMinutes, bucketMs(grid), grid.count]).toEqual([90, 4.5 * HOUR, 801]);
   });
 
   it('30 days on 1,200 px: 40-minute buckets of 10-minute blocks', () => {
@@ -30,18 +35,19 @@ describe('planBucketGrid', () => {
     expect([grid.blockMinutes, bucketMs(grid)]).toEqual([10, 40 * MINUTE]);
   });
 
-  it('7 days on 150 px (the overview sparkline): 70-minute buckets of 10-minute blocks', () => {
+  it('7 days on 150 px (the overview sparkline): 90-minute buckets of 30-minute blocks', () => {
     const grid = planBucketGrid(T0, T0 + 7 * DAY - 1, 150);
-    expect([grid.blockMinutes, bucketMs(grid), grid.count]).toEqual([10, 70 * MINUTE, 145]);
+    expect([grid.blockMinutes, bucketMs(grid), grid.count]).toEqual([30, 90 * MINUTE, 113]);
   });
 
-  it('any range: at most `width` buckets covering [from, to], block buckets of ≥ 3 whole aligned blocks', () => {
+  it('any range: between 2/3 of `width` and `width` buckets covering [from, to], block buckets of ≥ 3 whole aligned blocks', () => {
     fc.assert(
       fc.property(fc.integer({ min: 0, max: 3 * 365 * DAY }), fc.integer({ min: 0, max: 2 * 365 * DAY }), fc.integer({ min: 1, max: 4000 }), (offset, length, width) => {
         const from = T0 + offset;
         const to = from + length;
         const grid = planBucketGrid(from, to, width);
         expect(grid.count).toBeLessThanOrEqual(width);
+        expect(grid.count).toBeGreaterThanOrEqual(Math.min(width, Math.floor((2 / 3) * width)));
         expect(bucketIndex(grid, from)).toBe(0);
         expect(bucketIndex(grid, to)).toBeLessThan(grid.count);
         if (grid.blockMinutes !== null) {
