@@ -15,8 +15,20 @@ export function SignUpPage() {
     defaultValues: { nurseryName: '', name: '', email: '', password: '', timeZone: browserTimeZone() },
   });
   const { errors } = formState;
+  const aside = (
+    <section aria-labelledby="next-steps" className="rounded-lg border border-frost-deep bg-frost/60 p-5">
+      <h2 id="next-steps" className="text-lg font-bold text-slate-deep">
+        After this
+      </h2>
+      <ol className="mt-2 list-decimal space-y-1 pl-5 text-ink-soft">
+        <li>Add the rooms where grafts are kept: cellar, garage, fridge.</li>
+        <li>Add your temperature loggers and place each in its room.</li>
+        <li>Invite the people who work with you, as staff or viewers.</li>
+      </ol>
+    </section>
+  );
   return (
-    <AuthLayout title="Create a nursery" intro="You become its owner and can invite your crew afterwards.">
+    <AuthLayout title="Create a nursery" intro="You become its owner and can invite your crew afterwards." aside={aside}>
       <form noValidate onSubmit={handleSubmit((body) => signUp.mutate(body))} className="flex flex-col gap-4">
         <Field label="Nursery name" error={errors.nurseryName?.message}>
           {(c) => <Input {...c} {...register('nurseryName')} autoComplete="organization" />}
