@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { MAX_NOTED_LINES } from '../../../shared/import/types';
-import { readText, utc } from './readText';
+import { readLoggerFile } from '../../../shared/import/readLoggerFile';
+import { readText, sourceOf, utc } from './readText';
 
 describe('every row accounted for', () => {
   const text = [
@@ -69,6 +70,24 @@ describe('every row accounted for', () => {
     const { batches, readings } = await readText(['Time,Temp °C', ...rows].join('\n'), { batchSize: 1000 }, 4096);
     expect(readings).toHaveLength(2500);
     expect(batches).toBeGreaterThanOrEqual(3);
+  });
+
+  it('tells the layout through onDetected once, before the first batch', async () => {
+    const events: string[] = [];
+    const bytes = new TextEncoder().encode('Logger: K-01\nTime,Temp °C\n2025-02-10 00:00,1.5\n2025-02-10 00:30,1.6\n');
+    await readLoggerFile(
+      sourceOf(bytes),
+      { defaultZone: 'UTC' },
+      async (batch) => {
+        events.push(`batch ${batch.length}`);
+      },
+      {
+        onDetected: async (detected) => {
+          events.push(`detected ${detected.loggerHint}`);
+        },
+      },
+    );
+    expect(events).toEqual(['detected K-01', 'batch 2']);
   });
 
   it('keeps only the first 1,000 rejection notes but counts them all', async () => {
