@@ -1,4 +1,4 @@
-import { Navigate, useParams } from 'react-router-dom';
+import { Navigate } from 'react-router-dom';
 import { seasonLabel } from '../../shared/season/seasonOf';
 import { useCurrentSession } from '../auth/useCurrentSession';
 import { NotFoundPage } from '../layout/NotFoundPage';
@@ -13,13 +13,16 @@ import { seasonExportUrl, useSeasonReport, useSeasons } from './queries';
 import { SeasonComparison } from './SeasonComparison';
 import { SeasonPicker } from './SeasonPicker';
 import { SeasonSummary } from './SeasonSummary';
+import { useSeasonParam } from './useSeasonParam';
 
 /** /season: the latest season with assessed batches, or the current one when none has any. */
 export function SeasonIndexPage() {
   const seasons = useSeasons();
-  if (!seasons.data) return <QueryResult query={seasons} loading="Loading seasons…" failed="Could not load the seasons">{() => null}</QueryResult>;
-  const withOutcomes = seasons.data.seasons.find((s) => s.assessed > 0);
-  return <Navigate to={`/season/${withOutcomes?.season ?? seasons.data.current}`} replace />;
+  return (
+    <QueryResult query={seasons} loading="Loading seasons…" failed="Could not load the seasons">
+      {(data) => <Navigate to={`/season/${data.seasons.find((s) => s.assessed > 0)?.season ?? data.current}`} replace />}
+    </QueryResult>
+  );
 }
 
 function SeasonReportView({ season }: { season: number }) {
@@ -74,6 +77,6 @@ function SeasonReportView({ season }: { season: number }) {
 }
 
 export function SeasonReportPage() {
-  const season = Number(useParams().season);
-  return Number.isInteger(season) && season >= 2000 && season <= 2200 ? <SeasonReportView season={season} /> : <NotFoundPage what="season" />;
+  const season = useSeasonParam();
+  return season === null ? <NotFoundPage what="season" /> : <SeasonReportView season={season} />;
 }

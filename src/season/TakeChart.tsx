@@ -13,13 +13,16 @@ const INK = '#1c2630';
 
 /**
  * Take % per group as horizontal bars with their 95 % interval drawn across each. The table beside it carries the
- * same figures for screen readers, so the canvas is described in one sentence only.
+ * same figures for screen readers, so the canvas is described in one sentence only. `fixedWidth` draws at one size
+ * for paper: a responsive canvas keeps its screen width when the browser lays the page out for printing.
  */
-export function TakeChart({ groups, title }: { groups: TakeGroup[]; title: string }) {
+export function TakeChart({ groups, title, fixedWidth }: { groups: TakeGroup[]; title: string; fixedWidth?: number }) {
   const height = 48 + groups.length * 34;
   return (
-    <div style={{ height }} className="w-full break-inside-avoid">
+    <div style={{ height, width: fixedWidth }} className="w-full break-inside-avoid">
       <Bar
+        width={fixedWidth}
+        height={fixedWidth && height}
         role="img"
         aria-label={`${title}: take in percent with 95 % intervals, ${groups.length} groups; the table below gives the figures.`}
         data={{
@@ -28,6 +31,7 @@ export function TakeChart({ groups, title }: { groups: TakeGroup[]; title: strin
         }}
         options={{
           indexAxis: 'y',
+          responsive: !fixedWidth,
           maintainAspectRatio: false,
           animation: false,
           devicePixelRatio: Math.max(2, window.devicePixelRatio),

@@ -19,18 +19,20 @@ const CAP_HALF_PX = 6;
 export const intervalWhiskers: Plugin<'bar'> = {
   id: 'intervalWhiskers',
   afterDatasetsDraw(chart: Chart<'bar'>) {
+    // Chart.js hands plugin options over as deep partials, so every part is checked before use.
     const options = chart.options.plugins?.intervalWhiskers;
-    if (!options) return;
+    if (!options?.intervals) return;
     const meta = chart.getDatasetMeta(0);
     const valueScale = chart.scales.x;
     const { ctx } = chart;
     ctx.save();
-    ctx.strokeStyle = options.color;
+    ctx.strokeStyle = options.color ?? 'black';
     ctx.lineWidth = 2;
     meta.data.forEach((bar, i) => {
-      const interval = options.intervals[i];
-      if (!interval) return;
-      const [x0, x1] = interval.map((v) => valueScale.getPixelForValue(v));
+      const [low, high] = options.intervals?.[i] ?? [];
+      if (low === undefined || high === undefined) return;
+      const x0 = valueScale.getPixelForValue(low);
+      const x1 = valueScale.getPixelForValue(high);
       const y = bar.y;
       ctx.beginPath();
       ctx.moveTo(x0, y);

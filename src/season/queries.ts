@@ -73,7 +73,7 @@ function useOutcomeWrite<Args>(send: (args: Args) => Promise<unknown>) {
 
 export const useAddPlanting = (batchId: number) =>
   useOutcomeWrite((body: z.output<typeof plantingBody>) => api.post<PlantingRecord>(`/batches/${batchId}/plantings`, body));
-export const useDeletePlanting = () => useOutcomeWrite((id: number) => api.delete(`/plantings/${id}`));
 export const useAddAssessment = (batchId: number) =>
   useOutcomeWrite((body: z.output<typeof assessmentBody>) => api.post<AssessmentRecord>(`/batches/${batchId}/assessments`, body));
-export const useDeleteAssessment = () => useOutcomeWrite((id: number) => api.delete(`/assessments/${id}`));
+/** Removes a planting row or an assessment by id. */
+export const useDeleteRecord = (kind: 'plantings' | 'assessments') => useOutcomeWrite((id: number) => api.delete(`/${kind}/${id}`));
