@@ -44,7 +44,7 @@ function compareWithin(d: DimensionGroups): Omit<Finding, 'text'> | null {
 }
 
 function sentence(f: Omit<Finding, 'text'>): string {
-  const head = `${f.title}: ${f.higher.label} took ${describeTake(f.higher)}, against ${describeTake(f.lower)} for ${f.lower.label}.`;
+  const head = `${f.title}: grafts in “${f.higher.label}” took ${describeTake(f.higher)}, against ${describeTake(f.lower)} in “${f.lower.label}”.`;
   return f.clear
     ? `${head} The intervals do not overlap, so chance alone is an unlikely explanation.`
     : `${head} The intervals overlap, so this difference may well be chance.`;

@@ -107,7 +107,7 @@ describe('strongestDifferences', () => {
 
   it('words a finding with both takes, their grafts and intervals', () => {
     expect(report.findings[0].text).toBe(
-      'Storage room: Cellar took 87 % (130 of 150 grafts; 95 % interval 80–91 %), against 50 % (50 of 100 grafts; 95 % interval 40–60 %) for Garage. ' +
+      'Storage room: grafts in “Cellar” took 87 % (130 of 150 grafts; 95 % interval 80–91 %), against 50 % (50 of 100 grafts; 95 % interval 40–60 %) in “Garage”. ' +
         'The intervals do not overlap, so chance alone is an unlikely explanation.',
     );
     expect(describeTake(report.overall!)).toBe('73 % (190 of 260 grafts; 95 % interval 67–78 %)');
