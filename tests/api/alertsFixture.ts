@@ -38,9 +38,11 @@ export interface AlertWorld {
 }
 
 let counter = 0;
+let passwordHash: Promise<string> | null = null;
 
 export async function makeUser(nurseryId: number, role: 'staff' | 'viewer', email: string, unit: 'C' | 'F' = 'C') {
-  await User.create({ nurseryId, email, name: role === 'staff' ? 'Wren Staff' : 'Ida Viewer', role, passwordHash: await hashPassword(PASSWORD), unit });
+  passwordHash ??= hashPassword(PASSWORD);
+  await User.create({ nurseryId, email, name: role === 'staff' ? 'Wren Staff' : 'Ida Viewer', role, passwordHash: await passwordHash, unit });
 }
 
 /** A fresh nursery (signed up through the API, so the owner is made the real way) with a garage and one logger in it. */
