@@ -1,8 +1,9 @@
 // A batch's figures from its plan and the computed windows: per logger, per placement, headline, callus outlook.
-import { computeExposure, sumExposures, worstOf, type Exposure, type ExposureOptions } from '../../shared/exposure';
+import { computeExposure, sumExposures, worstOf, type Exposure } from '../../shared/exposure';
 import type { SpeciesProfile } from '../../shared/species/schema';
 import type { BatchPlan, Demand } from './batchPlan';
 import { chooseOutlook, type CallusOutlook } from './callusOutlook';
+import { engineKey, engineOptions } from './engineOptions';
 import type { Span } from './spans';
 
 const HOUR = 3_600_000;
@@ -39,19 +40,13 @@ export interface BatchFigures {
   outlook: CallusOutlook;
 }
 
-export const engineOptions = (profile: SpeciesProfile): Omit<ExposureOptions, 'from' | 'to'> => ({
-  band: profile.band,
-  freezeC: profile.freezeC,
-  callus: profile.callus,
-});
-
 /** No logger in the room: all of it is missing time, with the profile's limits so it sums with the rest. */
 const unwatched = (profile: SpeciesProfile, span: Span) => computeExposure([], { ...engineOptions(profile), ...span });
 
 type Lookup = (demand: Demand) => Exposure;
 
 function placementFigures(plan: BatchPlan, p: BatchPlan['placements'][number], lookup: Lookup): PlacementFigures {
-  const profileKey = plan.profile.key;
+  const optionsKey = engineKey(plan.profile);
   const heads: Exposure[] = [];
   const byLogger = new Map<number, { spans: Span[]; parts: Exposure[] }>();
   let unwatchedMs = 0;
@@ -63,7 +58,7 @@ function placementFigures(plan: BatchPlan, p: BatchPlan['placements'][number], l
       continue;
     }
     const seen = piece.loggerIds.map((loggerId) => {
-      const exposure = lookup({ loggerId, profileKey, ...span });
+      const exposure = lookup({ loggerId, optionsKey, ...span });
       const entry = byLogger.get(loggerId) ?? { spans: [], parts: [] };
       const lastSpan = entry.spans.at(-1);
       if (lastSpan && lastSpan.to === span.from) lastSpan.to = span.to;
@@ -97,7 +92,8 @@ function placementFigures(plan: BatchPlan, p: BatchPlan['placements'][number], l
 export function assembleFigures(plan: BatchPlan, lookup: Lookup, computedAt: number): BatchFigures {
   const placements = plan.placements.map((p) => placementFigures(plan, p, lookup));
   const exposure = placements.length ? sumExposures(placements.map((p) => p.exposure)) : null;
-  const means = plan.outlook.map((w) => ({ ...w, meanC: lookup({ loggerId: w.loggerId, profileKey: plan.profile.key, from: w.from, to: w.to }).meanC }));
+  const optionsKey = engineKey(plan.profile);
+  const means = plan.outlook.map((w) => ({ ...w, meanC: lookup({ loggerId: w.loggerId, optionsKey, from: w.from, to: w.to }).meanC }));
   const outlook = chooseOutlook({ open: plan.open, progress: exposure?.callus ?? null, profile: plan.profile, means });
   return { computedAt, open: plan.open, profileKey: plan.profile.key, exposure, placements, outlook };
 }

@@ -1,5 +1,6 @@
 // What must be computed for a batch: its placements cut where room loggers change, and the windows each logger owes.
 import type { SpeciesProfile } from '../../shared/species/schema';
+import { engineKey } from './engineOptions';
 import { overlap, splitByLoggers, type CoveredPiece, type LoggerStay, type Span } from './spans';
 
 const HOUR = 3_600_000;
@@ -39,13 +40,13 @@ export interface BatchPlan {
   outlook: OutlookWindow[];
 }
 
-/** A window of one logger's readings, evaluated with one profile's limits. */
+/** A window of one logger's readings, evaluated with one set of engine options (see engineKey). */
 export interface Demand extends Span {
   loggerId: number;
-  profileKey: string;
+  optionsKey: string;
 }
 
-export const demandKey = (d: Demand) => `${d.loggerId}|${d.profileKey}|${d.from}|${d.to}`;
+export const demandKey = (d: Demand) => `${d.loggerId}|${d.optionsKey}|${d.from}|${d.to}`;
 
 /**
  * `staysByRoom` lists every logger stay per room; `newestReading(loggerId, stay)` gives the newest reading that
@@ -80,13 +81,13 @@ export function planBatch(
 
 /** Every (logger, profile, window) the plan needs, once each. */
 export function demandsOf(plan: BatchPlan): Demand[] {
-  const profileKey = plan.profile.key;
+  const optionsKey = engineKey(plan.profile);
   const demands: Demand[] = [];
   for (const p of plan.placements) {
     for (const piece of p.pieces) {
-      for (const loggerId of piece.loggerIds) demands.push({ loggerId, profileKey, from: piece.from, to: piece.to });
+      for (const loggerId of piece.loggerIds) demands.push({ loggerId, optionsKey, from: piece.from, to: piece.to });
     }
   }
-  for (const w of plan.outlook) demands.push({ loggerId: w.loggerId, profileKey, from: w.from, to: w.to });
+  for (const w of plan.outlook) demands.push({ loggerId: w.loggerId, optionsKey, from: w.from, to: w.to });
   return demands;
 }

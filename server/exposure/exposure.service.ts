@@ -3,7 +3,7 @@ import { toExposureReport, type Exposure } from '../../shared/exposure';
 import { findBatch } from '../batches/batches.service';
 import { advanceFigures, type BatchFigures } from './batchFigures';
 import type { CallusOutlook } from './callusOutlook';
-import { isFresh, readCache, stampOf, writeCache, type CacheView } from './exposureCache';
+import { isFresh, readCache, stampOf, stampParts, writeCache, type CacheView } from './exposureCache';
 import { computeFigures } from './exposureCompute';
 import { loadExposureInputs, type BatchScope, type ExposureInputs } from './exposureInputs';
 
@@ -15,14 +15,15 @@ async function figuresFor(pool: Pool, nurseryId: number, scope: BatchScope, view
   const inputs = await loadExposureInputs(pool, nurseryId, scope);
   const cached = await readCache(pool, nurseryId, view, scope === 'in_storage' ? undefined : scope.batchId);
   const figures = new Map<number, BatchFigures>();
+  const parts = stampParts(inputs);
   const stale = [];
   for (const batch of inputs.batches) {
     const hit = cached.get(batch.id);
-    if (isFresh(hit, stampOf(batch, inputs), now)) figures.set(batch.id, advanceFigures(hit.figures, now));
+    if (isFresh(hit, stampOf(batch, parts), now)) figures.set(batch.id, advanceFigures(hit.figures, now));
     else stale.push(batch);
   }
   if (stale.length) {
-    const entries = await computeFigures(pool, stale, inputs, now);
+    const entries = await computeFigures(pool, stale, inputs, parts, now);
     await writeCache(pool, nurseryId, entries);
     for (const e of entries) figures.set(e.batchId, e.figures);
   }

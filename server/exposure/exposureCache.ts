@@ -8,21 +8,29 @@ import type { BatchRecord, ExposureInputs } from './exposureInputs';
 /** Bump when the computation or the stored shape changes, so rows written by older code are recomputed. */
 const CACHE_FORMAT = 1;
 
+/** The parts of a stamp shared by many batches, worked out once per read: per room its logger stays, per profile its numbers. */
+export function stampParts(inputs: ExposureInputs) {
+  const rooms = new Map<number, string>();
+  for (const [roomId, stays] of inputs.staysByRoom) {
+    rooms.set(roomId, JSON.stringify(stays.map((s) => [s.loggerId, s.from, s.to, inputs.generations.get(s.loggerId) ?? 0])));
+  }
+  const profiles = new Map<string, string>();
+  for (const [key, p] of inputs.profiles) profiles.set(key, JSON.stringify([p.freezeC, p.band, p.callus]));
+  return { rooms, profiles };
+}
+
+export type StampParts = ReturnType<typeof stampParts>;
+
 /**
  * Digest of every input but the readings themselves: the profile's numbers, the batch's placements, and for each
  * of its rooms the loggers' stays there with each logger's latest completed import id. A new import (the importer's,
  * the demo top-up's) raises that id, so the importer needs to call nothing: the next read finds the stamp changed.
  */
-export function stampOf(batch: BatchRecord, inputs: ExposureInputs): string {
-  const profile = inputs.profiles.get(batch.speciesKey);
-  const rooms = [...new Set(batch.placements.map((p) => p.roomId))].sort((a, b) => a - b);
-  const watched = rooms.map((roomId) => [
-    roomId,
-    (inputs.staysByRoom.get(roomId) ?? []).map((s) => [s.loggerId, s.from, s.to, inputs.generations.get(s.loggerId) ?? 0]),
-  ]);
-  const numbers = profile ? [profile.freezeC, profile.band, profile.callus] : null;
-  const placements = batch.placements.map((p) => [p.id, p.roomId, p.from, p.to]);
-  return createHash('sha1').update(JSON.stringify([CACHE_FORMAT, batch.speciesKey, numbers, placements, watched])).digest('hex');
+export function stampOf(batch: BatchRecord, parts: StampParts): string {
+  const hash = createHash('sha1').update(`${CACHE_FORMAT}|${batch.speciesKey}|${parts.profiles.get(batch.speciesKey) ?? ''}`);
+  for (const p of batch.placements) hash.update(`|${p.id},${p.roomId},${p.from},${p.to}`);
+  for (const roomId of new Set(batch.placements.map((p) => p.roomId))) hash.update(`|${roomId}:${parts.rooms.get(roomId) ?? '[]'}`);
+  return hash.digest('hex');
 }
 
 export interface CachedFigures {

@@ -5,13 +5,13 @@ import type { Exposure } from '../../shared/exposure';
 import type { SpeciesProfile } from '../../shared/species/schema';
 import { conflict } from '../http/errors';
 import { loadSeries, newestReadingAt } from '../readings/readingSeries';
-import { assembleFigures, engineOptions, type BatchFigures } from './batchFigures';
+import { assembleFigures, type BatchFigures } from './batchFigures';
 import { demandKey, demandsOf, planBatch, type BatchPlan, type Demand } from './batchPlan';
-import type { CacheEntry } from './exposureCache';
-import { stampOf } from './exposureCache';
+import { stampOf, type CacheEntry, type StampParts } from './exposureCache';
+import { engineOptions } from './engineOptions';
 import type { BatchRecord, ExposureInputs } from './exposureInputs';
 import type { LoggerStay } from './spans';
-import { exposuresOverWindows, type Series } from './windowSolver';
+import { exposuresOverWindows } from './windowSolver';
 
 const stayKey = (s: LoggerStay) => `${s.loggerId}|${s.roomId}|${s.from}`;
 
@@ -35,15 +35,15 @@ function profileFor(batch: BatchRecord, inputs: ExposureInputs): SpeciesProfile 
   return profile;
 }
 
-/** Demands grouped by logger, then by profile, each window once. */
+/** Demands grouped by logger, then by engine options, each window once. */
 function groupDemands(plans: BatchPlan[]) {
   const byLogger = new Map<number, Map<string, { profile: SpeciesProfile; demands: Map<string, Demand> }>>();
   for (const plan of plans) {
     for (const d of demandsOf(plan)) {
       const profiles = byLogger.get(d.loggerId) ?? new Map();
-      const entry = profiles.get(d.profileKey) ?? { profile: plan.profile, demands: new Map() };
+      const entry = profiles.get(d.optionsKey) ?? { profile: plan.profile, demands: new Map() };
       entry.demands.set(demandKey(d), d);
-      profiles.set(d.profileKey, entry);
+      profiles.set(d.optionsKey, entry);
       byLogger.set(d.loggerId, profiles);
     }
   }
@@ -51,28 +51,19 @@ function groupDemands(plans: BatchPlan[]) {
 }
 
 /**
- * Reads each logger's series over the span its demands need (the next logger's read overlaps this one's
- * computation) and answers every demand through the engine. Also notes loggers holding readings after `now`.
+ * Reads each logger's series over the span its demands need and answers every demand through the engine, one
+ * logger at a time (only one logger's readings are held at once). Also notes loggers holding readings after `now`.
  */
 async function solveDemands(pool: Pool, plans: BatchPlan[], now: number) {
-  const byLogger = groupDemands(plans);
   const answers = new Map<string, Exposure>();
   const ahead = new Set<number>();
-  const loggers = [...byLogger.keys()];
-  const load = (loggerId: number): Promise<Series> => {
-    const all = [...byLogger.get(loggerId)!.values()].flatMap((e) => [...e.demands.values()]);
-    const from = Math.min(...all.map((d) => d.from));
-    const to = Math.max(...all.map((d) => d.to));
-    return loadSeries(pool, loggerId, from, to);
-  };
-  let next = loggers.length ? load(loggers[0]) : null;
-  for (let i = 0; i < loggers.length; i++) {
-    const series = await next!;
-    next = i + 1 < loggers.length ? load(loggers[i + 1]) : null;
-    if (series.t.length && series.t[series.t.length - 1] > now) ahead.add(loggers[i]);
-    for (const { profile, demands } of byLogger.get(loggers[i])!.values()) {
-      const windows = [...demands.values()];
-      const results = exposuresOverWindows(series, windows, engineOptions(profile));
+  for (const [loggerId, groups] of groupDemands(plans)) {
+    const entries = [...groups.values()].map(({ profile, demands }) => ({ options: engineOptions(profile), windows: [...demands.values()] }));
+    const all = entries.flatMap((e) => e.windows);
+    const series = await loadSeries(pool, loggerId, Math.min(...all.map((d) => d.from)), Math.max(...all.map((d) => d.to)));
+    if (series.t.length && series.t[series.t.length - 1] > now) ahead.add(loggerId);
+    for (const { options, windows } of entries) {
+      const results = exposuresOverWindows(series, windows, options);
       windows.forEach((d, j) => answers.set(demandKey(d), results[j]));
     }
   }
@@ -95,7 +86,13 @@ function validUntilOf(batch: BatchRecord, inputs: ExposureInputs, ahead: Set<num
 }
 
 /** Figures and cache entries for the given batches as of `now`. */
-export async function computeFigures(pool: Pool, batches: BatchRecord[], inputs: ExposureInputs, now: number): Promise<CacheEntry[]> {
+export async function computeFigures(
+  pool: Pool,
+  batches: BatchRecord[],
+  inputs: ExposureInputs,
+  parts: StampParts,
+  now: number,
+): Promise<CacheEntry[]> {
   const newest = await newestReadings(pool, batches, inputs, now);
   const plans = batches.map((b) =>
     planBatch({ batchId: b.id, profile: profileFor(b, inputs), placements: b.placements }, inputs.staysByRoom, now, (s) => newest.get(stayKey(s)) ?? null),
@@ -104,6 +101,6 @@ export async function computeFigures(pool: Pool, batches: BatchRecord[], inputs:
   const lookup = (d: Demand) => answers.get(demandKey(d))!;
   return plans.map((plan, i) => {
     const figures: BatchFigures = assembleFigures(plan, lookup, now);
-    return { batchId: plan.batchId, stamp: stampOf(batches[i], inputs), validUntil: validUntilOf(batches[i], inputs, ahead, now), figures };
+    return { batchId: plan.batchId, stamp: stampOf(batches[i], parts), validUntil: validUntilOf(batches[i], inputs, ahead, now), figures };
   });
 }

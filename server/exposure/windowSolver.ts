@@ -1,5 +1,6 @@
 // Exposure of one logger's series over many (possibly overlapping) windows, each reading fed to the engine once.
-import { createExposureAccumulator, sumExposures, type Exposure, type ExposureOptions } from '../../shared/exposure';
+import { createExposureAccumulator, sumExposures, type Exposure } from '../../shared/exposure';
+import type { EngineOptions } from './engineOptions';
 import type { Span } from './spans';
 
 /** One logger's readings in time order, as parallel arrays (epoch ms, °C). */
@@ -22,8 +23,6 @@ function lastAtOrBefore(t: Float64Array, at: number): number {
   }
   return found;
 }
-
-type EngineOptions = Omit<ExposureOptions, 'from' | 'to'>;
 
 /** The engine over [from, to] with the readings around it, so the joined line is clipped exactly at both ends. */
 export function exposureOfSpan(series: Series, span: Span, options: EngineOptions): Exposure {
