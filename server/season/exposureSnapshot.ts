@@ -3,6 +3,7 @@ import { DateTime } from 'luxon';
 import type { Pool } from 'mariadb';
 import { toExposureReport } from '../../shared/exposure';
 import type { ExposureSnapshot, RoomStay } from '../../shared/season/types';
+import { stampParts } from '../exposure/exposureCache';
 import { computeFigures } from '../exposure/exposureCompute';
 import { loadExposureInputs } from '../exposure/exposureInputs';
 
@@ -19,7 +20,7 @@ export function plantingInstant(plantedOn: string, timeZone: string): Date {
  */
 export async function exposureSnapshot(pool: Pool, nurseryId: number, batchId: number, through: Date): Promise<ExposureSnapshot> {
   const inputs = await loadExposureInputs(pool, nurseryId, { batchId });
-  const [entry] = await computeFigures(pool, inputs.batches, inputs, through.getTime());
+  const [entry] = await computeFigures(pool, inputs.batches, inputs, stampParts(inputs), through.getTime());
   const names = new Map(
     ((await pool.query({ sql: 'SELECT id, name FROM rooms WHERE nursery_id = ?', rowsAsArray: true }, [nurseryId])) as [number, string][]),
   );
