@@ -61,6 +61,12 @@ describe('planting out and take assessments', () => {
     expect(new Date(batch.placements.at(-1).to).toISOString()).toBe(lastThrough);
     // The second part stayed a day longer in storage than the first.
     expect(rest.body.snapshot.rooms[0].hours - stay.hours).toBeCloseTo(24, 0);
+    // The batch left storage where the last part's figures stop, so the batch page's live figures are the frozen ones.
+    const live = (await staff.get(`/api/batches/${id}/exposure`)).body.headline;
+    const frozen = rest.body.snapshot.exposure;
+    for (const key of ['hoursCovered', 'hoursMissing', 'minC', 'maxC', 'meanC'] as const) expect(frozen[key], key).toBeCloseTo(live[key], 9);
+    for (const limit of ['below', 'above', 'freeze'] as const) expect(frozen[limit].degreeHours, limit).toBeCloseTo(live[limit].degreeHours, 9);
+    expect(frozen.callus.progressPct).toBeCloseTo(live.callus.progressPct, 9);
   });
 
   it('takes the latest assessment over the planted count, with its Wilson interval', async () => {
