@@ -7,6 +7,7 @@ import { Nursery } from '../nurseries/nursery.model';
 import { Room } from '../rooms/room.model';
 import { User } from '../users/user.model';
 import { DEMO_PASSWORD, DEMO_USERS } from './demoAccounts';
+import { seedDemoBatches } from './demoBatches';
 import { seedDemoSeasons } from './demoSeason';
 import { topUpDemoReadings } from './demoReadings';
 import { DEMO_LOGGERS, DEMO_NURSERY, DEMO_ROOMS, DEMO_SEASON_START } from './demoData';
@@ -19,6 +20,7 @@ export async function seedDemoNursery(sequelize: Sequelize, pool: Pool): Promise
   const owner = await User.findOne({ where: { email: DEMO_USERS[0].email } });
   const nurseryId = owner ? owner.nurseryId : await createDemoRecords(sequelize);
   await topUpDemoReadings(pool, nurseryId);
+  if (!owner) await seedDemoBatches(sequelize, nurseryId);
 }
 
 async function createDemoRecords(sequelize: Sequelize): Promise<number> {

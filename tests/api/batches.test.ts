@@ -86,16 +86,20 @@ describe('graft batches: records, grafting days, filters, moves', () => {
         { species: 'walnut', scionCultivar: 'Broadview', rootstock: 'J. regia seedling', count: 8, storageMedium: 'peat', code: 'WAL-A' },
       ],
     };
+    // Numbered after the highest plum code of that year already in the nursery (the demo has some).
+    const prefix = `${graftedOn.slice(2, 4)}-PLM-`;
+    const highest = Math.max(0, ...((await staff.get('/api/batches')).body as { code: string }[])
+      .filter((b) => b.code.startsWith(prefix)).map((b) => Number(b.code.slice(prefix.length))));
+    const numbered = (n: number) => `${prefix}${String(highest + n).padStart(3, '0')}`;
     const made = await staff.post('/api/batches/bulk').send(day);
     expect(made.status).toBe(201);
-    const yy = graftedOn.slice(2, 4);
-    expect(made.body.map((b: { code: string }) => b.code)).toEqual([`${yy}-PLM-001`, `${yy}-PLM-002`, 'WAL-A']);
+    expect(made.body.map((b: { code: string }) => b.code)).toEqual([numbered(1), numbered(2), 'WAL-A']);
     expect(made.body.map((b: { method: string }) => b.method)).toEqual(['cleft', 'chip bud', 'cleft']);
     expect(made.body.map((b: { storageMedium: string }) => b.storageMedium)).toEqual(['wood shavings', 'wood shavings', 'peat']);
     expect(made.body.every((b: { grafter: string; roomId: number; placements: Placement[] }) => b.grafter === 'Wren' && b.roomId === shed && b.placements[0].from === iso(T0 + HOUR))).toBe(true);
 
     const next = await staff.post('/api/batches').send(apple({ species: 'plum', scionCultivar: 'Czar', rootstock: 'Pixy' }));
-    expect(next.body.code).toBe(`${yy}-PLM-003`);
+    expect(next.body.code).toBe(numbered(3));
   });
 
   it('rejects a whole grafting day when one row is wrong, storing none of it', async () => {
@@ -205,6 +209,20 @@ describe('graft batches: records, grafting days, filters, moves', () => {
     const sneak = await intruder.post('/api/batches').send({ ...apple(), roomId: shed, placedAt: undefined });
     expect(sneak.status).toBe(404);
     expect((await staff.get(`/api/batches/${id}`)).body.notes).toBe('');
+  });
+
+  it('seeds the demo nursery with this season\'s batches, some moved between rooms and one discarded', async () => {
+    const demoGrafters = new Set(['Wren Halloway', 'Tamsin Orcutt', 'Jory Pellam']);
+    const all = ((await viewer.get('/api/batches').query({ graftedFrom: '2026-11-01', graftedTo: '2026-11-30' })).body as {
+      species: string; status: string; grafter: string; placements: Placement[];
+    }[]).filter((b) => demoGrafters.has(b.grafter));
+    expect(all.length).toBeGreaterThanOrEqual(12);
+    expect(new Set(all.map((b) => b.species))).toEqual(new Set(['apple', 'pear', 'plum', 'peach', 'walnut', 'chestnut']));
+    expect(all.filter((b) => b.placements.length > 1).length).toBeGreaterThanOrEqual(3);
+    expect(all.filter((b) => b.status === 'discarded').length).toBe(1);
+    const table = (await viewer.get('/api/exposure/batches')).body.rows as { code: string; headline: { hoursCovered: number } | null }[];
+    expect(table.length).toBeGreaterThanOrEqual(11);
+    expect(table.every((r) => r.headline !== null)).toBe(true);
   });
 
   it('lets viewers read but not write', async () => {
