@@ -18,7 +18,7 @@ const NUMBER_WITH_PERCENT = /^([+-]?(?:\d+(?:[.,]\d*)?|[.,]\d+))\s*%\s*(?:rh)?$/
 /** Placeholders loggers write instead of a reading when the probe fails or is unplugged (common practice). */
 const SENSOR_CODE = /^(?:err(?:or)?\s*\d*|e\d{1,3}|-+|n\/?a|nan|null|none|ovf|overflow|open|short|fault|#n\/a|#value!|-?9{3,4}(?:[.,]0+)?|-?999[.,]9)$/i;
 
-export function numberFromText(text: string): number {
+function numberFromText(text: string): number {
   return text.includes(',') ? Number(text.replace(',', '.')) : Number(text);
 }
 

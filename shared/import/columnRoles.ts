@@ -1,6 +1,6 @@
 import { readTemperatureCell } from './cellValues';
 import { namesHumidity, namesIndex, namesTemperature, namesTime } from './columnNames';
-import { shapeOf, type CellShape, type DateStyle } from './dateTimeText';
+import { shapeOf, type CellShape, type DateStyle } from './writtenTimePatterns';
 import { ImportError } from './importError';
 import type { DateOrder, TemperatureColumnSource } from './types';
 

@@ -1,55 +1,19 @@
+import {
+  DATE_ONLY_YEAR_FIRST,
+  DATE_ONLY_YEAR_LAST,
+  DATETIME_YEAR_FIRST,
+  DATETIME_YEAR_LAST,
+  daysInMonth,
+  EPOCH,
+  TIME_ONLY,
+  type DateStyle,
+} from './writtenTimePatterns';
 import type { DateOrder } from './types';
 
 /**
- * Reading the date and time text loggers write. Year-first dates follow ISO 8601 (extended format,
- * "2024-01-05T10:30:00+01:00"; separators '/' and '.' are accepted too); year-last dates ("05.01.2024",
- * "1/5/2024") need a day/month order. The result is the wall-clock time as if it were UTC
- * ("local ms") plus the offset, if one was written; zone arithmetic happens elsewhere.
+ * Reads date and time text into the wall-clock time as if it were UTC ("local ms") plus the offset,
+ * if one was written; zone arithmetic happens elsewhere (localTime.ts).
  */
-
-const DATE_YEAR_FIRST = String.raw`(\d{4})([-/.])(\d{1,2})\2(\d{1,2})`;
-const DATE_YEAR_LAST = String.raw`(\d{1,2})([-/.])(\d{1,2})\2(\d{4}|\d{2})`;
-const TIME = String.raw`(\d{1,2}):(\d{2})(?::(\d{2})(?:[.,](\d{1,9}))?)?(?:\s*([AaPp])\.?[Mm]\.?)?`;
-const OFFSET = String.raw`(?:\s*(Z|[+-]\d{2}(?::?\d{2})?|UTC|GMT))?`;
-const BETWEEN = String.raw`(?:\s*T\s*|\s+|,\s*)`;
-
-const DATETIME_YEAR_FIRST = new RegExp(`^\\s*${DATE_YEAR_FIRST}${BETWEEN}${TIME}${OFFSET}\\s*$`);
-const DATETIME_YEAR_LAST = new RegExp(`^\\s*${DATE_YEAR_LAST}${BETWEEN}${TIME}${OFFSET}\\s*$`);
-const DATE_ONLY_YEAR_FIRST = new RegExp(`^\\s*${DATE_YEAR_FIRST}\\s*$`);
-const DATE_ONLY_YEAR_LAST = new RegExp(`^\\s*${DATE_YEAR_LAST}\\s*$`);
-const TIME_ONLY = new RegExp(`^\\s*${TIME}${OFFSET}\\s*$`);
-const EPOCH = /^\s*(\d{9,13})(?:\.(\d{1,6}))?\s*$/;
-
-/** Unix time from 2000-01-01 to 2100-01-01: wide enough for any logger, narrow enough not to mistake other numbers. */
-const EPOCH_S_MIN = 946_684_800;
-const EPOCH_S_MAX = 4_102_444_800;
-
-export type DateStyle = 'year-first' | 'year-last';
-
-export type CellShape =
-  | 'datetime year-first'
-  | 'datetime year-last'
-  | 'date year-first'
-  | 'date year-last'
-  | 'time'
-  | 'epoch-s'
-  | 'epoch-ms'
-  | 'other';
-
-export function shapeOf(text: string): CellShape {
-  if (DATETIME_YEAR_FIRST.test(text)) return 'datetime year-first';
-  if (DATETIME_YEAR_LAST.test(text)) return 'datetime year-last';
-  if (DATE_ONLY_YEAR_FIRST.test(text)) return 'date year-first';
-  if (DATE_ONLY_YEAR_LAST.test(text)) return 'date year-last';
-  if (TIME_ONLY.test(text)) return 'time';
-  const epoch = EPOCH.exec(text);
-  if (epoch) {
-    const whole = Number(epoch[1]);
-    if (whole >= EPOCH_S_MIN && whole < EPOCH_S_MAX) return 'epoch-s';
-    if (!epoch[2] && whole >= EPOCH_S_MIN * 1000 && whole < EPOCH_S_MAX * 1000) return 'epoch-ms';
-  }
-  return 'other';
-}
 
 /** A wall-clock time read from text; `offsetMinutes` is null when the text carries no offset. */
 export interface WrittenTime {
@@ -237,62 +201,4 @@ function parseOffset(text: string): number {
   const sign = text[0] === '-' ? -1 : 1;
   const digits = text.slice(1).replace(':', '');
   return sign * (Number(digits.slice(0, 2)) * 60 + Number(digits.slice(2, 4) || '0'));
-}
-
-const DAYS_IN_MONTH = [31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31];
-
-function daysInMonth(year: number, month: number): number {
-  if (month === 2 && (year % 4 === 0 && (year % 100 !== 0 || year % 400 === 0))) return 29;
-  return DAYS_IN_MONTH[month - 1];
-}
-
-/** Describes the written format for the report, from one sample of it. */
-export function describeFormat(sample: string, shape: CellShape, order: DateOrder | null): string {
-  const datePart = (sep: string, twoDigitYear: boolean): string => {
-    const year = twoDigitYear ? 'YY' : 'YYYY';
-    if (shape.endsWith('year-first')) return ['YYYY', 'MM', 'DD'].join(sep);
-    if (order === 'ymd') return [year, 'MM', 'DD'].join(sep);
-    return (order === 'mdy' ? ['MM', 'DD', year] : order === 'dmy' ? ['DD', 'MM', year] : ['??', '??', year]).join(sep);
-  };
-  const timePart = (match: RegExpExecArray, first: number): string => {
-    const twelve = match[first + 4] !== undefined;
-    let text = `${twelve ? 'hh' : 'HH'}:mm`;
-    if (match[first + 2] !== undefined) text += ':ss';
-    if (match[first + 3] !== undefined) text += `.${'S'.repeat(match[first + 3].length)}`;
-    if (twelve) text += ' AM/PM';
-    const offset = match[first + 5];
-    if (offset !== undefined) text += offset === 'Z' ? 'Z' : /^[+-]/.test(offset) ? '±HH:MM' : ` ${offset}`;
-    return text;
-  };
-  if (shape === 'epoch-s') return 'Unix seconds';
-  if (shape === 'epoch-ms') return 'Unix milliseconds';
-  if (shape === 'time') {
-    const match = TIME_ONLY.exec(sample);
-    return match ? timePart(match, 1) : '';
-  }
-  const isDateTime = shape.startsWith('datetime');
-  const yearFirst = shape.endsWith('year-first');
-  const regex = isDateTime
-    ? yearFirst ? DATETIME_YEAR_FIRST : DATETIME_YEAR_LAST
-    : yearFirst ? DATE_ONLY_YEAR_FIRST : DATE_ONLY_YEAR_LAST;
-  const match = regex.exec(sample);
-  if (!match) return '';
-  const date = datePart(match[2], !yearFirst && match[4].length === 2);
-  if (!isDateTime) return date;
-  const between = /^\s*[\d\-/.]+(\s*T\s*|,\s*|\s+)\d/.exec(sample);
-  const sep = between ? between[1] : ' ';
-  return `${date}${sep.includes('T') ? 'T' : sep.includes(',') ? ', ' : ' '}${timePart(match, 5)}`;
-}
-
-/** True when the text has an AM/PM marker (12-hour clock). */
-export function hasMeridiem(text: string): boolean {
-  return /\d\s*[AaPp]\.?[Mm]\.?\s*(?:Z|[+-]\d{2}(?::?\d{2})?|UTC|GMT)?\s*$/.test(text);
-}
-
-/** True when the text carries an explicit UTC offset or Z. */
-export function hasWrittenOffset(text: string): boolean {
-  const match = DATETIME_YEAR_FIRST.exec(text) ?? DATETIME_YEAR_LAST.exec(text);
-  if (match) return match[10] !== undefined;
-  const time = TIME_ONLY.exec(text);
-  return time ? time[6] !== undefined : false;
 }

@@ -1,5 +1,6 @@
 import type { ColumnRoles } from './columnRoles';
-import { describeFormat, hasMeridiem, hasWrittenOffset, shapeOf } from './dateTimeText';
+import { describeFormat, hasMeridiem, hasWrittenOffset } from './timestampFormat';
+import { shapeOf } from './writtenTimePatterns';
 import type { PrefixFindings } from './inspectPrefix';
 import type { DateOrder, DateOrderSource, Detection, TimestampDetection, ZoneSource } from './types';
 

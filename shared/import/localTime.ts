@@ -35,7 +35,7 @@ export function createLocalTimeResolver(zone: string, order: 'ascending' | 'desc
 }
 
 /** "+01:00", "-0530", "+1", "UTC", "Z", "UTC+01:00" → minutes east of UTC; null when it is not an offset. */
-export function parseFixedOffset(text: string): number | null {
+function parseFixedOffset(text: string): number | null {
   const trimmed = text.trim();
   if (/^(?:z|utc|gmt)$/i.test(trimmed)) return 0;
   const match = /^(?:utc|gmt)?\s*([+-])(\d{1,2})(?::?(\d{2}))?$/i.exec(trimmed);

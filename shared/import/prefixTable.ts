@@ -1,7 +1,7 @@
 import { parse } from 'csv-parse/sync';
 import { readTemperatureCell } from './cellValues';
 import { ImportError } from './importError';
-import { shapeOf, type CellShape } from './dateTimeText';
+import { shapeOf } from './writtenTimePatterns';
 import type { Delimiter } from './types';
 
 /** One non-blank line of the prefix, split into fields; `index` is its 0-based physical line. */
@@ -47,7 +47,7 @@ export function prefixLines(text: string, lineEnding: PrefixTable['lineEnding'],
  * use decimal commas also splits consistently on commas, so semicolon must be tried first. csv-parse's
  * own `delimiter_auto` counts characters without regard to quotes or decimal commas, hence this.
  */
-export function detectDelimiter(lines: string[]): Delimiter {
+function detectDelimiter(lines: string[]): Delimiter {
   const nonBlank = lines.filter((line) => line.trim() !== '');
   for (const delimiter of CANDIDATES) {
     const counts = nonBlank.map((line) => countFields(line, delimiter));
@@ -126,7 +126,7 @@ function lineByLine(lines: string[], delimiter: Delimiter): PrefixRow[] {
 const SPLIT_OPTIONS = { relax_quotes: true, relax_column_count: true, ltrim: true, rtrim: true } as const;
 
 /** A row is shaped like a reading when some cell holds a date-time, a Unix time, or a date beside a time. */
-export function isDataShaped(fields: string[]): boolean {
+function isDataShaped(fields: string[]): boolean {
   if (fields.length < 2) return false;
   const shapes = fields.map(shapeOf);
   return shapes.some(
@@ -136,10 +136,6 @@ export function isDataShaped(fields: string[]): boolean {
       shape === 'epoch-ms' ||
       (shape.startsWith('date ') && shapes.some((other, j) => j !== i && other === 'time')),
   );
-}
-
-export function shapesOf(fields: string[]): CellShape[] {
-  return fields.map(shapeOf);
 }
 
 function hasReadingBesideTime(fields: string[]): boolean {
