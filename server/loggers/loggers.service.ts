@@ -18,6 +18,9 @@ function present(logger: Logger, placements: LoggerPlacement[]) {
   };
 }
 
+/** Clocks on phones drift; a move stamped a few minutes ahead is still "now". */
+const FUTURE_SLACK_MS = 5 * 60_000;
+
 export async function listLoggers(nurseryId: number) {
   const loggers = await Logger.findAll({
     where: { nurseryId },
@@ -63,6 +66,8 @@ export async function updateLogger(nurseryId: number, id: number, patch: z.outpu
 export async function moveLogger(sequelize: Sequelize, nurseryId: number, id: number, roomId: number | null, at = new Date()) {
   await findLogger(nurseryId, id);
   if (roomId !== null) await findRoom(nurseryId, roomId);
+  // A placement records where the logger was; a move planned for later would make "where it is now" wrong until then.
+  if (at.getTime() > Date.now() + FUTURE_SLACK_MS) throw conflict('move_in_future', 'A move cannot be dated in the future; record it when it happens.');
   await sequelize.transaction(async (transaction: Transaction) => {
     const latest = await LoggerPlacement.findOne({
       where: { loggerId: id },

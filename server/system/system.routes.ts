@@ -28,7 +28,8 @@ export function systemRoutes(config: AppConfig, sequelize: Sequelize) {
       }),
     }),
     defineRoute({
-      method: 'get', path: '/dev/mail', access: 'public',
+      // Captured mail holds invitation links: only people signed in to this development server may read it.
+      method: 'get', path: '/dev/mail', access: 'signedIn',
       async handle() {
         if (!config.devMailDir) throw notFound('The development inbox');
         return readDevInbox(config.devMailDir);

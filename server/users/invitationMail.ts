@@ -1,8 +1,10 @@
+import { DateTime } from 'luxon';
 import type { OutgoingMail } from '../mail/mailer';
 import { escapeHtml } from '../mail/escapeHtml';
 
-export function invitationMail(input: { to: string; nurseryName: string; inviterName: string; role: string; link: string; expiresAt: Date }): OutgoingMail {
-  const until = input.expiresAt.toUTCString();
+export function invitationMail(input: { to: string; nurseryName: string; timeZone: string; inviterName: string; role: string; link: string; expiresAt: Date }): OutgoingMail {
+  // On the nursery's clock, the one everybody there reads.
+  const until = DateTime.fromJSDate(input.expiresAt, { zone: input.timeZone }).toFormat("cccc d LLLL yyyy, HH:mm ZZZZ");
   const text = [
     `${input.inviterName} has invited you to ${input.nurseryName} on Coldknit as ${input.role}.`,
     '',

@@ -62,6 +62,7 @@ export async function invite(deps: { mailer: Mailer; appOrigin: string }, nurser
     invitationMail({
       to: body.email,
       nurseryName: nursery!.name,
+      timeZone: nursery!.timeZone,
       inviterName: inviter!.name,
       role: body.role,
       link: `${deps.appOrigin}/invite/${secret}`,

@@ -34,3 +34,57 @@ export function SettingsIcon() {
     </svg>
   );
 }
+
+/** Overview: a thermometer beside a level line. */
+export function OverviewIcon() {
+  return (
+    <svg {...common}>
+      <path d="M9 14.5V5a2 2 0 1 1 4 0v9.5a3.5 3.5 0 1 1-4 0Z" />
+      <path d="M11 9v7" />
+      <path d="M16 7h4M16 11h4M16 15h2" />
+    </svg>
+  );
+}
+
+/** Batches: grafted sticks bound together. */
+export function BatchIcon() {
+  return (
+    <svg {...common}>
+      <path d="M7 21V5M12 21V3M17 21V6" />
+      <path d="M5 13h14" />
+      <path d="M7 5l-1.5-1.5M17 6l1.5-1.5" />
+    </svg>
+  );
+}
+
+/** Imports: a tray with an arrow coming down into it. */
+export function ImportIcon() {
+  return (
+    <svg {...common}>
+      <path d="M12 3v11M8 10l4 4 4-4" />
+      <path d="M4 15v4a1 1 0 0 0 1 1h14a1 1 0 0 0 1-1v-4" />
+    </svg>
+  );
+}
+
+/** Alerts: a bell. */
+export function AlertIcon() {
+  return (
+    <svg {...common}>
+      <path d="M6 16V11a6 6 0 1 1 12 0v5l1.5 2h-15Z" />
+      <path d="M10 20a2 2 0 0 0 4 0" />
+    </svg>
+  );
+}
+
+/** Season: a young tree that took. */
+export function SeasonIcon() {
+  return (
+    <svg {...common}>
+      <path d="M12 21v-9" />
+      <path d="M12 12c-4 0-6-2.5-6-6 3.5 0 6 2 6 6Z" />
+      <path d="M12 14c3.5 0 6-2 6-5.5-3.5 0-6 2-6 5.5Z" />
+      <path d="M7 21h10" />
+    </svg>
+  );
+}

@@ -42,6 +42,13 @@ describe('rooms and loggers with placement history', () => {
     expect(out.body.placements.every((p: { to: string | null }) => p.to !== null)).toBe(true);
   });
 
+  it('refuses a move dated in the future', async () => {
+    const made = await staff.post('/api/loggers').send({ label: 'T-10' });
+    const res = await staff.post(`/api/loggers/${made.body.id}/move`).send({ roomId: null, at: new Date(Date.now() + 3600_000).toISOString() });
+    expect(res.status).toBe(409);
+    expect(res.body.error.code).toBe('move_in_future');
+  });
+
   it('keeps a room with history', async () => {
     const cellar = (await staff.get('/api/rooms')).body.find((r: { name: string }) => r.name === 'Root cellar').id;
     const res = await staff.delete(`/api/rooms/${cellar}`);
