@@ -8,7 +8,7 @@ export interface EncodingGuess {
 }
 
 /**
- * Tells the text encoding from the first bytes. Byte-order marks decide first (Unicode 15, §23.8);
+ * Tells the text encoding from the first bytes. Byte-order marks decide first (Unicode Standard §23.8, from memory);
  * otherwise bytes that are valid UTF-8 are read as UTF-8 (ASCII is both), and anything else as
  * Windows-1252, the superset of Latin-1 that spreadsheet exports in Western Europe use — a lone 0xB0
  * byte for the degree sign is the usual sign of it.

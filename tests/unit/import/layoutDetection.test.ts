@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { bytesOf, readBytes, readText, utc } from './readText';
 
 describe('encoding', () => {
-  it('reads UTF-8 with a byte-order mark and drops the mark (Unicode §23.8)', async () => {
+  it('reads UTF-8 with a byte-order mark and drops the mark (Unicode Standard §23.8, from memory)', async () => {
     const text = '\uFEFFTime,Temp (°C)\n2025-01-13 08:00,3.5\n';
     const { summary, readings } = await readText(text);
     expect(summary.detected.encoding).toBe('utf-8');

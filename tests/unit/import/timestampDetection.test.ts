@@ -6,7 +6,7 @@ import { bytesOf, importErrorOf, readText, sourceOf, utc } from './readText';
 const file = (...stamps: string[]) => ['Time,Temp °C', ...stamps.map((stamp, i) => `${stamp},${3 + i / 10}`)].join('\n');
 
 describe('one date-time column', () => {
-  it('ISO 8601 extended format with offsets; the written offset wins over --tz (ISO 8601-1:2019 §5.3.4)', async () => {
+  it('ISO 8601 extended format with offsets; the written UTC offset wins over --tz (ISO 8601 time-zone designators)', async () => {
     const { summary, readings } = await readText(file('2025-01-13T08:00:00+01:00', '2025-01-13T08:30:00.250-05:30', '2025-01-13T09:00:00Z'), {
       tz: 'America/New_York',
     });
