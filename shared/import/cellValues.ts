@@ -14,6 +14,7 @@ export type CellValue =
 const PLAIN_NUMBER = /^[+-]?(?:\d+(?:[.,]\d*)?|[.,]\d+)$/;
 const NUMBER_WITH_UNIT = /^([+-]?(?:\d+(?:[.,]\d*)?|[.,]\d+))\s*(?:[°º]\s*|deg\s*)?([CF])$/i;
 const NUMBER_WITH_SYMBOL = /^([+-]?(?:\d+(?:[.,]\d*)?|[.,]\d+))\s*([℃℉])$/;
+const NUMBER_WITH_DEGREE = /^([+-]?(?:\d+(?:[.,]\d*)?|[.,]\d+))\s*[°º]$/;
 const NUMBER_WITH_PERCENT = /^([+-]?(?:\d+(?:[.,]\d*)?|[.,]\d+))\s*%\s*(?:rh)?$/i;
 /** Placeholders loggers write instead of a reading when the probe fails or is unplugged (common practice). */
 const SENSOR_CODE = /^(?:err(?:or)?\s*\d*|e\d{1,3}|-+|n\/?a|nan|null|none|ovf|overflow|open|short|fault|#n\/a|#value!|-?9{3,4}(?:[.,]0+)?|-?999[.,]9)$/i;
@@ -28,7 +29,9 @@ export function readTemperatureCell(raw: string): CellValue {
     if (withUnit) return { kind: 'number', value: numberFromText(withUnit[1]), unit: withUnit[2].toUpperCase() as TemperatureUnit };
     const withSymbol = NUMBER_WITH_SYMBOL.exec(text);
     if (withSymbol) return { kind: 'number', value: numberFromText(withSymbol[1]), unit: withSymbol[2] === '℃' ? 'C' : 'F' };
-    return null;
+    // "3.5°": a degree sign alone names no unit; the column's unit applies.
+    const withDegree = NUMBER_WITH_DEGREE.exec(text);
+    return withDegree ? { kind: 'number', value: numberFromText(withDegree[1]), unit: null } : null;
   });
 }
 

@@ -55,6 +55,11 @@ describe('temperature unit decisions', () => {
     expect(readings[0].c).toBeCloseTo(2, 12);
   });
 
+  it('reads a bare degree sign after a value as the column unit', async () => {
+    const { readings } = await readText('Time,Temp (°F)\n2025-01-20 00:00,50°\n');
+    expect(readings[0].c).toBe(10);
+  });
+
   it('lets --unit overrule the header, and says so', async () => {
     const { summary, readings } = await readText('Time,Temp °F\n2025-01-20 00:00,3.5\n', { unit: 'C' });
     expect(summary.detected.temperature).toMatchObject({ unit: 'C', unitSource: 'option' });
