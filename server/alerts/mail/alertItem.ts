@@ -25,6 +25,11 @@ export interface ItemContext {
 
 const TAGS: Record<NoticeKind, string> = { opened: 'New', reminder: 'Still open, not yet acknowledged', resolved: 'Resolved' };
 
+function reachesWhen(at: number, c: ItemContext): string {
+  const relative = fmt.fromNow(at, c.now);
+  return relative ? `${fmt.instant(at, c.reader)} (${relative})` : fmt.instant(at, c.reader);
+}
+
 function what(a: AlertView, c: ItemContext): string {
   const d = a.detail;
   const r = c.reader;
@@ -33,7 +38,7 @@ function what(a: AlertView, c: ItemContext): string {
       return d.cause === 'at_or_below'
         ? `A reading of ${fmt.temperature(d.valueC!, r)} is at or below the freeze limit of ${fmt.temperature(d.limitC!, r)}.`
         : `The trend of the last ${fmt.hours(d.windowHours ?? 6)} reaches the freeze limit of ${fmt.temperature(d.limitC!, r)} around ` +
-            `${d.reachesAt ? `${fmt.instant(d.reachesAt, r)} (${fmt.fromNow(d.reachesAt, c.now)})` : 'soon'}.`;
+            `${d.reachesAt ? reachesWhen(d.reachesAt, c) : 'soon'}.`;
     case 'out_of_band': {
       const band = `${fmt.temperature(d.band!.minC, r)} to ${fmt.temperature(d.band!.maxC, r)}`;
       const side = (d.hoursBelow ?? 0) >= (d.hoursAbove ?? 0) ? `${fmt.hours(d.hoursBelow!)} below` : `${fmt.hours(d.hoursAbove!)} above`;

@@ -41,8 +41,9 @@ export function hours(h: number): string {
   return `${h.toFixed(h < 10 ? 1 : 0)} h`;
 }
 
-/** "in 7.5 h" / "now" relative to the evaluation that wrote the message. */
-export function fromNow(ms: number, now: number): string {
+/** "in 7.5 h" / "now" relative to the evaluation that wrote the message; null once the moment has passed. */
+export function fromNow(ms: number, now: number): string | null {
   const h = (ms - now) / 3_600_000;
+  if (h < -1 / 60) return null;
   return h <= 1 / 60 ? 'now' : `in ${hours(h)}`;
 }
