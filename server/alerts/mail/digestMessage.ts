@@ -2,7 +2,7 @@
 import { RULE_TITLES } from '../../../shared/alerts/rules';
 import type { DigestData } from '../digestData';
 import { renderHtml, renderText, type MailDocument, type MailSection } from './mailDocument';
-import * as fmt from './readerFormat';
+import * as fmt from '../../../shared/alerts/readerFormat';
 
 export interface DigestContext {
   nurseryName: string;

@@ -1,6 +1,6 @@
 // Numbers and instants as one reader sees them: their temperature unit, the nursery's clock.
-import { celsiusIntervalToFahrenheit, celsiusToFahrenheit } from '../../../shared/units';
-import type { TemperatureUnit } from '../../../shared/schemas/common';
+import { celsiusIntervalToFahrenheit, celsiusToFahrenheit } from '../units';
+import type { TemperatureUnit } from '../schemas/common';
 
 export interface Reader {
   unit: TemperatureUnit;
