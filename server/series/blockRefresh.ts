@@ -82,11 +82,32 @@ async function rebuild(conn: PoolConnection, loggerId: number, span: HalfOpen): 
   await replaceBlocks(conn, loggerId, span, sets);
 }
 
+/** Rebuilds the stretches and moves the mark in one transaction, so readers see old blocks or new ones, never half. */
+async function applyWork(conn: PoolConnection, loggerId: number, current: number, work: Work): Promise<void> {
+  // Read committed: the range DELETE then locks only this logger's rows, not the gaps next to other loggers' keys,
+  // so rebuilds of different loggers at once (the overview asks for every room together) do not deadlock.
+  await conn.query('SET TRANSACTION ISOLATION LEVEL READ COMMITTED');
+  await conn.beginTransaction();
+  try {
+    for (const span of work.spans) await rebuild(conn, loggerId, span);
+    if (work.through > current) {
+      await conn.query(
+        'INSERT INTO reading_block_marks (logger_id, through_import_id) VALUES (?, ?) ON DUPLICATE KEY UPDATE through_import_id = VALUES(through_import_id)',
+        [loggerId, work.through],
+      );
+    }
+    await conn.commit();
+  } catch (err) {
+    await conn.rollback();
+    throw err;
+  }
+}
+
 /**
  * Brings a logger's stored blocks up to date with its readings before they are read. Every reading arrives with
  * an import record naming its logger and span (the importer and the demo seed both write one), so the imports
  * after the logger's mark say exactly which stretches changed. Rebuilding holds a per-logger lock, so two requests
- * never rebuild the same stretch at once, and the blocks and the mark move together in one transaction.
+ * never rebuild the same stretch at once.
  */
 export async function ensureBlocksCurrent(pool: Pool, loggerId: number, now = Date.now()): Promise<void> {
   const mark = await markOf(pool, loggerId);
@@ -99,21 +120,7 @@ export async function ensureBlocksCurrent(pool: Pool, loggerId: number, now = Da
     try {
       // Another request may have done the work while this one waited for the lock.
       const current = await markOf(conn, loggerId);
-      const work = planWork(await importsAfter(conn, loggerId, current), current, now);
-      await conn.beginTransaction();
-      try {
-        for (const span of work.spans) await rebuild(conn, loggerId, span);
-        if (work.through > current) {
-          await conn.query(
-            'INSERT INTO reading_block_marks (logger_id, through_import_id) VALUES (?, ?) ON DUPLICATE KEY UPDATE through_import_id = VALUES(through_import_id)',
-            [loggerId, work.through],
-          );
-        }
-        await conn.commit();
-      } catch (err) {
-        await conn.rollback();
-        throw err;
-      }
+      await applyWork(conn, loggerId, current, planWork(await importsAfter(conn, loggerId, current), current, now));
     } finally {
       await conn.query('SELECT RELEASE_LOCK(?)', [lock]);
     }

@@ -2,7 +2,8 @@ import type { Pool } from 'mariadb';
 import { DEFAULT_MAX_GAP_MINUTES } from '../../shared/exposure/accumulator';
 import { bucketMs, planBucketGrid, type BucketGrid } from '../../shared/series/bucketGrid';
 import { createM4 } from '../../shared/series/m4';
-import { packLine, type PackedLine } from '../../shared/series/packedLine';
+import type { LoggerLines } from '../../shared/series/loggerLines';
+import { packLine } from '../../shared/series/packedLine';
 import { findRoom } from '../rooms/rooms.service';
 import { loggersInRoom, type LoggerInRoom } from './placementWindows';
 import { roomBatchMarks } from './roomBatches';
@@ -11,15 +12,6 @@ import { readPieces } from './readingPieces';
 const MINUTE = 60_000;
 /** Lines break where the exposure engine stops joining readings, so the chart shows the same gaps the figures count. */
 export const MAX_GAP_MS = DEFAULT_MAX_GAP_MINUTES * MINUTE;
-
-export interface LoggerLines {
-  id: number;
-  label: string;
-  windows: { from: string; to: string }[];
-  temperature: PackedLine;
-  /** Null when the logger recorded no humidity in the range. */
-  humidity: PackedLine | null;
-}
 
 const iso = (t: number) => new Date(t).toISOString();
 
