@@ -13,7 +13,7 @@ export function createBulkPool(databaseUrl: string): Pool {
     user: decodeURIComponent(u.username),
     password: decodeURIComponent(u.password),
     database: u.pathname.replace(/^\//, ''),
-    connectionLimit: 4,
+    connectionLimit: 8,
     initSql: "SET time_zone = '+00:00'",
     bigIntAsNumber: true,
     decimalAsNumber: true,

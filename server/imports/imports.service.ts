@@ -9,7 +9,8 @@ import type { AuthContext } from '../http/route';
 import { ApiError, notFound } from '../http/errors';
 import { Logger } from '../loggers/logger.model';
 import { Nursery } from '../nurseries/nursery.model';
-import { storeBatch } from '../readings/readingStore';
+import { compareWithStored } from '../readings/readingStore';
+import { ReadingSpool } from '../readings/readingSpool';
 import { notifyReadingsChanged } from '../readings/readingEvents';
 import { digestWithAppendBase, type AppendBase } from './appendedFile';
 import { Import } from './import.model';
@@ -145,7 +146,10 @@ class ImportRun {
   private logger: Logger | null = null;
   private record: Import | null = null;
   private conn: PoolConnection | null = null;
+  /** Compares run on a second connection, so they need not wait while the first is busy loading readings. */
+  private readConn: PoolConnection | null = null;
   private locked: (() => Promise<void>) | null = null;
+  private spool: ReadingSpool | null = null;
   private readonly preview: Reading[] = [];
   private stored = 0;
   private alreadyStored = 0;
@@ -188,6 +192,8 @@ class ImportRun {
       startedAt: new Date(), detection,
     });
     this.locked = await lockLogger(this.conn, this.logger.id);
+    this.spool = await ReadingSpool.open(this.conn, this.logger.id, this.record.id);
+    this.readConn = await this.pool.getConnection();
     // One transaction: an import that fails half-way leaves nothing behind, and its re-run stores everything.
     await this.conn.beginTransaction();
   }
@@ -196,8 +202,9 @@ class ImportRun {
     if (this.append) batch = batch.map((r) => ({ ...r, line: this.physicalLine(r.line) }));
     if (this.preview.length < PREVIEW_ROWS) this.preview.push(...batch.slice(0, PREVIEW_ROWS - this.preview.length));
     if (!this.conn || !this.logger) return;
-    const out = await storeBatch(this.conn, this.logger.id, this.record?.id ?? null, batch);
-    this.stored += out.stored;
+    const out = await compareWithStored(this.readConn ?? this.conn, this.logger.id, batch);
+    await this.spool?.add(out.fresh);
+    this.stored += out.fresh.length;
     this.alreadyStored += out.alreadyStored;
     this.storedConflictCount += out.conflicts.length;
     if (this.storedConflicts.length < MAX_NOTED) this.storedConflicts.push(...out.conflicts.slice(0, MAX_NOTED - this.storedConflicts.length));
@@ -215,6 +222,7 @@ class ImportRun {
     };
     const conflictLines = [...summary.conflictLines, ...this.storedConflicts].sort((a, b) => a.line - b.line).slice(0, MAX_NOTED);
     if (!this.record) return outcome(false, true, null, summary, rows, conflictLines, this.preview);
+    await this.spool!.finish();
     await this.conn!.commit();
     await this.record.update({
       status: 'completed', finishedAt: new Date(), detection: summary.detected,
@@ -268,6 +276,8 @@ class ImportRun {
   }
 
   async release(): Promise<void> {
+    await this.spool?.discard();
+    await this.readConn?.release();
     if (!this.conn) return;
     try {
       await this.locked?.();
