@@ -116,7 +116,9 @@ export async function ensureBlocksCurrent(pool: Pool, loggerId: number, now = Da
   const conn = await pool.getConnection();
   const lock = `coldknit:blocks:logger:${loggerId}`;
   try {
-    await conn.query('SELECT GET_LOCK(?, 60)', [lock]);
+    const [held] = (await conn.query('SELECT GET_LOCK(?, 60) AS got', [lock])) as { got: number | null }[];
+    // Still held after a minute: another rebuild of this logger is running long; serve the blocks as they are.
+    if (held.got !== 1) return;
     try {
       // Another request may have done the work while this one waited for the lock.
       const current = await markOf(conn, loggerId);
