@@ -36,7 +36,8 @@ export interface OutboxSender {
   start(): void;
   /** Run a round soon (after an evaluation committed messages) instead of waiting for the poll. */
   nudge(): void;
-  stop(): Promise<void>;
+  /** Stops polling and waits for the round in hand, at most `graceMs` (a hung SMTP server must not hold a shutdown). */
+  stop(graceMs?: number): Promise<void>;
 }
 
 /** 5xx is the receiving server's final answer (no such mailbox, refused): retrying would not change it. */
@@ -134,11 +135,14 @@ export function createOutboxSender(options: OutboxSenderOptions): OutboxSender {
     nudge() {
       schedule(0);
     },
-    async stop() {
+    async stop(graceMs = 5_000) {
       stopped = true;
       if (timer) clearTimeout(timer);
       timer = null;
-      await running;
+      // A row still in hand after the grace keeps its lease and goes out after the next start, same Message-ID.
+      let grace: NodeJS.Timeout | undefined;
+      await Promise.race([running, new Promise<void>((resolve) => (grace = setTimeout(resolve, graceMs)))]);
+      clearTimeout(grace);
     },
   };
 }

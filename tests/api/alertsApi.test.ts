@@ -1,5 +1,6 @@
 // The alerts API (list, filters, history of a room, summary, acknowledge), thresholds and subscriptions, grouping
 // of one evaluation's alerts per recipient, the daily digest, and evaluation after an import.
+import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startAlerting } from '../../server/alerts/alerting';
 import { queueDigestIfDue } from '../../server/alerts/dailyDigest';
@@ -121,6 +122,27 @@ describe('alerts API', () => {
     expect((await evaluateAt(latest + 7 * HOUR)).resolved.sort()).toEqual([acked.id, open.id].sort());
     for (const email of Object.values(w.emails)) expect(newMail(mark2, email).map((m) => m.text.includes('2 resolved.'))).toEqual([true]);
     expect((await w.staff.post(`/api/alerts/${acked.id}/acknowledge`).expect(409)).body.error.code).toBe('alert_resolved');
+  });
+});
+
+describe('another nursery', () => {
+  it('sees none of these alerts and reaches none of them, nor this nursery\'s room thresholds', async () => {
+    const other = request.agent(w.t.app);
+    await other.post('/api/auth/signup')
+      .send({ nurseryName: 'Other Hollow', name: 'Pell', email: `pell-${Date.now()}@example.org`, password: 'a-long-passphrase', timeZone: 'Europe/Berlin' })
+      .expect(201);
+    const [mine] = (await w.owner.get('/api/alerts')).body.alerts;
+    expect((await other.get('/api/alerts')).body.alerts).toEqual([]);
+    expect((await other.get('/api/alerts/summary')).body).toEqual({ open: 0 });
+    for (const res of [
+      await other.get(`/api/alerts/${mine.id}`),
+      await other.post(`/api/alerts/${mine.id}/acknowledge`),
+      await other.patch(`/api/alert-settings/rooms/${mine.roomId}`).send({ set: { holdMinutes: 1 } }),
+      await other.delete(`/api/alert-settings/rooms/${mine.roomId}`),
+    ]) {
+      expect(res.status).toBe(404);
+      expect(res.body.error.code).toBe('not_found');
+    }
   });
 });
 
