@@ -22,11 +22,14 @@ export const batchCode = z
 /** A calendar day, YYYY-MM-DD (the grafting day, on the nursery's calendar). */
 export const calendarDay = z.iso.date('Enter a date as YYYY-MM-DD');
 
+/** The species profile a batch is measured against; the emptiness check comes first so a form says "choose". */
+const speciesChoice = z.string().trim().min(1, 'Choose a species').pipe(profileKey);
+
 const graftCount = z.coerce.number('Enter how many grafts').int('Whole grafts only').min(1, 'At least one graft').max(100_000);
 
 /** What describes the grafts themselves, as opposed to where they are; no defaults, so a patch leaves out what it does not name. */
 const describing = {
-  species: profileKey,
+  species: speciesChoice,
   scionCultivar: text(120, 'Name the scion cultivar'),
   rootstock: text(120, 'Name the rootstock'),
   method: text(60, 'Name the grafting method'),
@@ -58,7 +61,7 @@ export const batchPatch = z.object({ ...describing, code: batchCode.min(1, 'A ba
 /** One row of a grafting day: what differs between batches made that day. Blank method/medium take the day's. */
 export const bulkBatchRow = z.object({
   code: batchCode.default(''),
-  species: profileKey,
+  species: speciesChoice,
   scionCultivar: text(120, 'Name the scion cultivar'),
   rootstock: text(120, 'Name the rootstock'),
   method: z.string().trim().max(60).default(''),
