@@ -7,6 +7,7 @@ import { openDatabase } from './db/database';
 import { startCaptureServer } from './mail/captureServer';
 import { createMailer } from './mail/mailer';
 import { seedDemoNursery } from './seed/demoNursery';
+import { refreshBlocksAfterImports } from './series/blockUpkeep';
 
 async function main() {
   const config = loadConfig();
@@ -19,6 +20,8 @@ async function main() {
   const capture = config.smtpUrl ? null : await startCaptureServer({ dir: config.devMailDir });
   const mailer = createMailer(config.smtpUrl ?? capture!.url, config.mailFrom);
   const { app } = createApp({ config, sequelize, pool: db.pool, mailer, clientDir: join(import.meta.dirname, '..', 'dist') });
+  // Chart summaries are brought up to date as part of each import, not on the first chart request after it.
+  refreshBlocksAfterImports(db.pool);
   // Alerts: evaluation after imports and every 10 minutes, and the outbox sender; a first round now catches up on
   // whatever happened while the server was down.
   const alerting = startAlerting({ sequelize, pool: db.pool, mailer, appOrigin: config.appOrigin });

@@ -18,6 +18,13 @@ import { NewRoomPage } from './rooms/NewRoomPage';
 import { RoomPage } from './rooms/RoomPage';
 import { RoomsPage } from './rooms/RoomsPage';
 import { SettingsPage } from './settings/SettingsPage';
+import { alertRoutes } from './alerts/routes';
+import { batchRoutes } from './batches/routes';
+import { importRoutes } from './imports/routes';
+import { MoreSectionsPage } from './layout/MoreSectionsPage';
+import { overviewRoutes } from './overview/routes';
+import { profileRoutes } from './profiles/routes';
+import { seasonPrintRoutes, seasonRoutes } from './season/routes';
 
 function Root() {
   return (
@@ -37,10 +44,12 @@ export const router = createBrowserRouter([
       { path: '/sign-up', element: <RedirectIfSignedIn><SignUpPage /></RedirectIfSignedIn> },
       { path: '/invite/:token', element: <AcceptInvitationPage /> },
       { path: '/dev/mail/:mailId?', element: <PlainFrame><CapturedMailPage /></PlainFrame> },
+      ...seasonPrintRoutes.map((r) => ({ ...r, element: <RequireSession>{r.element}</RequireSession> })),
       {
         element: <RequireSession><AppFrame /></RequireSession>,
         children: [
-          { index: true, element: <Navigate to="/rooms" replace /> },
+          { index: true, element: <Navigate to="/overview" replace /> },
+          ...overviewRoutes,
           { path: 'rooms', element: <RoomsPage /> },
           { path: 'rooms/new', element: <NewRoomPage /> },
           { path: 'rooms/:id', element: <RoomPage /> },
@@ -49,6 +58,12 @@ export const router = createBrowserRouter([
           { path: 'loggers/new', element: <NewLoggerPage /> },
           { path: 'loggers/:id', element: <LoggerPage /> },
           { path: 'loggers/:id/edit', element: <EditLoggerPage /> },
+          ...batchRoutes,
+          ...profileRoutes,
+          ...importRoutes,
+          ...alertRoutes,
+          ...seasonRoutes,
+          { path: 'more', element: <MoreSectionsPage /> },
           { path: 'settings', element: <SettingsPage /> },
           { path: 'account', element: <AccountPage /> },
           { path: '*', element: <NotFoundPage /> },

@@ -1,6 +1,6 @@
 import { useCurrentSession } from '../auth/useCurrentSession';
 import { formatInstant } from '../time/nurseryTime';
-import { formatTemperature } from './temperatureText';
+import { formatTemperature } from '../charts/displayUnits';
 import type { ImportOutcome } from './queries';
 
 /** The first rows exactly as the reader understood them: the quickest check that dates and units came out right. */

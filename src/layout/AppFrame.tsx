@@ -1,7 +1,9 @@
 import { useRef } from 'react';
 import { NavLink, Outlet } from 'react-router-dom';
 import { useCurrentSession } from '../auth/useCurrentSession';
+import { AlertCountBadge } from './AlertCountBadge';
 import { Brand } from './Brand';
+import { MoreIcon } from './icons';
 import { NAV_ITEMS } from './navItems';
 import { SkipLink } from './SkipLink';
 import { useFocusOnNavigate } from './useFocusOnNavigate';
@@ -24,15 +26,16 @@ export function AppFrame() {
     <div className="flex min-h-dvh flex-col">
       <SkipLink />
       <header className="bg-slate-deep text-paper">
-        <div className="mx-auto flex max-w-6xl items-center gap-4 px-4 py-2">
+        <div className="mx-auto flex max-w-7xl items-center gap-4 px-4 py-2">
           <div className="flex min-w-0 flex-col">
             <Brand />
             <span className="truncate text-sm text-frost">{nursery.name}</span>
           </div>
-          <nav aria-label="Sections" className="ml-4 hidden gap-1 md:flex">
+          <nav aria-label="Sections" className="ml-2 hidden flex-wrap gap-1 lg:flex">
             {NAV_ITEMS.map(({ to, label }) => (
               <NavLink key={to} to={to} className={topLink}>
                 {label}
+                {to === '/alerts' && <AlertCountBadge />}
               </NavLink>
             ))}
           </nav>
@@ -44,13 +47,20 @@ export function AppFrame() {
       <main ref={main} id="main" tabIndex={-1} className="mx-auto w-full max-w-6xl flex-1 px-4 py-6 focus:outline-none sm:py-8">
         <Outlet />
       </main>
-      <nav aria-label="Sections" className="sticky bottom-0 z-30 flex border-t border-slate bg-slate-deep md:hidden">
-        {NAV_ITEMS.map(({ to, label, Icon }) => (
+      <nav aria-label="Sections" className="sticky bottom-0 z-30 flex border-t border-slate bg-slate-deep lg:hidden">
+        {NAV_ITEMS.filter((item) => item.onPhoneBar).map(({ to, label, Icon }) => (
           <NavLink key={to} to={to} className={bottomLink}>
             <Icon />
-            {label}
+            <span>
+              {label}
+              {to === '/alerts' && <AlertCountBadge />}
+            </span>
           </NavLink>
         ))}
+        <NavLink to="/more" className={bottomLink}>
+          <MoreIcon />
+          More
+        </NavLink>
       </nav>
     </div>
   );

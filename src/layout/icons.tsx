@@ -88,3 +88,14 @@ export function SeasonIcon() {
     </svg>
   );
 }
+
+/** More: three dots. */
+export function MoreIcon() {
+  return (
+    <svg {...common}>
+      <circle cx="5" cy="12" r="1.5" />
+      <circle cx="12" cy="12" r="1.5" />
+      <circle cx="19" cy="12" r="1.5" />
+    </svg>
+  );
+}

@@ -10,6 +10,8 @@ import { QueryResult } from '../ui/QueryResult';
 import { useIdParam } from '../ui/useIdParam';
 import { useDeleteRoom, useRoom, type Room } from './queries';
 import { RoomLoggers } from './RoomLoggers';
+import { RoomChartPanel } from '../roomview/RoomChartPanel';
+import { RoomAlertHistory } from '../alerts/RoomAlertHistory';
 import { roomKindLabel } from './roomKinds';
 
 function RoomActions({ room }: { room: Room }) {
@@ -50,7 +52,9 @@ function RoomDetail({ id }: { id: number }) {
                 ]}
               />
             </Panel>
+            <RoomChartPanel roomId={r.id} roomName={r.name} />
             <RoomLoggers roomId={r.id} />
+            <RoomAlertHistory roomId={r.id} />
           </div>
         </>
       )}
