@@ -1,5 +1,8 @@
 // Delivery that loses nothing and sends nothing twice: SMTP down then back, the app restarted in between, two app
 // instances on one database. Real SMTP capture servers on loopback; the outbox and its claims in MariaDB.
+import { spawn } from 'node:child_process';
+import { once } from 'node:events';
+import { join } from 'node:path';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { createAlertEvaluator } from '../../server/alerts/evaluate';
 import { OutboxMessage } from '../../server/alerts/outboxMessage.model';
@@ -8,6 +11,7 @@ import { startAlertSchedule } from '../../server/alerts/scheduler';
 import { openDatabase } from '../../server/db/database';
 import { initModels } from '../../server/db/models';
 import { startCaptureServer, type CaptureServer } from '../../server/mail/captureServer';
+import { User } from '../../server/users/user.model';
 import { createMailer, type Mailer } from '../../server/mail/mailer';
 import { addBatch, addReadings, deliver, HOUR, makeUser, MIN, series, T0, startAlertWorld, type AlertWorld } from './alertsFixture';
 
@@ -262,6 +266,43 @@ describe('two app instances against one database', () => {
     } finally {
       await a.close();
       await b.close();
+      await smtp.close();
+    }
+  });
+
+  it('a second instance in its own process, started at the same moment: one alert, one message per person, each once', async () => {
+    // Everyone in the nursery gets a message: the three of the fixture and the crew the test above added.
+    const people = await User.count({ where: { nurseryId: w.nurseryId } });
+    const smtp = await startCaptureServer();
+    const room = await freezingRoom();
+    const before = (await pendingOrSent()).length;
+    const child = spawn(process.execPath, ['--import', 'tsx', join(import.meta.dirname, 'alertsInstance.ts'), w.t.config.databaseUrl, smtp.url, w.t.config.appOrigin, String(w.nurseryId), String(room.now)], {
+      stdio: ['pipe', 'pipe', 'inherit'],
+    });
+    const lines: string[] = [];
+    const exited = once(child, 'exit');
+    const ready = new Promise<void>((resolve) => child.stdout.on('data', (chunk: Buffer) => {
+      lines.push(...chunk.toString().split('\n').filter(Boolean));
+      if (lines.includes('ready')) resolve();
+    }));
+    await ready;
+    const mailer = createMailer(smtp.url, 'Coldknit <alerts@coldknit.invalid>');
+    const sender = createOutboxSender({ sequelize: w.t.sequelize, mailer, clock: () => new Date(room.now), log: () => {} });
+    try {
+      child.stdin.end('go\n');
+      const here = await w.evaluate(w.nurseryId, new Date(room.now));
+      const sentHere = await deliver(sender);
+      await exited;
+      const there = JSON.parse(lines.at(-1)!) as { opened: number; messages: number; sent: number };
+      expect(here!.opened.length + there.opened).toBe(1);
+      expect(here!.messages + there.messages).toBe(people);
+      expect(sentHere + there.sent).toBe(people);
+      expect((await pendingOrSent()).length - before).toBe(people);
+      const recipients = smtp.messages.map((m) => m.to[0]);
+      expect(recipients).toHaveLength(people);
+      expect(new Set(recipients).size).toBe(people);
+    } finally {
+      mailer.close();
       await smtp.close();
     }
   });
