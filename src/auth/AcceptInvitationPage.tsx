@@ -23,7 +23,7 @@ function AcceptForm({ token, invitation }: { token: string; invitation: Invitati
       </p>
       <form
         noValidate
-        onSubmit={handleSubmit((body) => accept.mutate(body, { onSuccess: () => navigate('/rooms', { replace: true }) }))}
+        onSubmit={handleSubmit((body) => accept.mutate(body, { onSuccess: () => navigate('/overview', { replace: true }) }))}
         className="flex flex-col gap-4"
       >
         <Field label="E-mail" hint="You will sign in with this address.">

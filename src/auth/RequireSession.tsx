@@ -35,6 +35,6 @@ export function RequireSession({ children }: { children: ReactNode }) {
 export function RedirectIfSignedIn({ children }: { children: ReactNode }) {
   const session = useSession();
   const location = useLocation();
-  if (session.data) return <Navigate to={(location.state as ReturnState | null)?.from ?? '/rooms'} replace />;
+  if (session.data) return <Navigate to={(location.state as ReturnState | null)?.from ?? '/overview'} replace />;
   return <>{children}</>;
 }

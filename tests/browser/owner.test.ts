@@ -18,10 +18,10 @@ describe.each(WIDTHS)('an owner at %i px wide', (width) => {
     await page.getByRole('button', { name: /owner@example\.com/ }).click();
     expect(await page.getByLabel('E-mail').inputValue()).toBe('owner@example.com');
     await page.getByRole('button', { name: 'Sign in', exact: true }).click();
-    await visible(heading(page, 'Rooms'));
-    await visible(page.getByRole('link', { name: 'Root cellar' }));
-    expect(new URL(page.url()).pathname).toBe('/rooms');
-    await recordPage(page, 'rooms');
+    await visible(heading(page, 'Overview'));
+    await visible(page.getByRole('link', { name: 'Root cellar' }).first());
+    expect(new URL(page.url()).pathname).toBe('/overview');
+    await recordPage(page, 'overview');
     await openAccountMenu(page);
     await recordPage(page, 'account-menu');
     expect(problems).toEqual([]);
@@ -167,7 +167,7 @@ describe.each(WIDTHS)('an owner at %i px wide', (width) => {
     await page.getByLabel('Choose a password').fill('mossy stones under frost');
     await recordPage(page, 'invite-accept');
     await page.getByRole('button', { name: /^Join/ }).click();
-    await visible(heading(page, 'Rooms'));
+    await visible(heading(page, 'Overview'));
     await visible(page.getByRole('button', { name: /Fern Idlewild/ }));
     // Staff edit rooms but do not manage people.
     await visible(page.getByRole('link', { name: 'Add room' }));

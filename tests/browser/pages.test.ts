@@ -26,7 +26,7 @@ describe.each(WIDTHS)('the remaining pages at %i px wide', (width) => {
     await page.getByLabel('Password', { exact: true }).fill('long enough passphrase');
     await recordPage(page, 'sign-up');
     await page.getByRole('button', { name: 'Create nursery' }).click();
-    await visible(heading(page, 'Rooms'));
+    await visible(heading(page, 'Overview'));
     await visible(page.getByText('No rooms yet'));
     await visible(page.getByRole('banner').getByText(`Quillmere Grafts ${width}`, { exact: true }));
     await recordPage(page, 'rooms-empty');

@@ -1,13 +1,15 @@
 import type { Page } from 'playwright-core';
 import { heading, visible } from './browser';
 
-/** Signs in through the form, the way a person does, and waits for the first page of the app. */
+/** Signs in through the form, the way a person does, lands on the overview, and goes on to the rooms list. */
 export async function signInWithForm(page: Page, origin: string, email: string, password = 'coldknit-demo'): Promise<void> {
   await page.goto(`${origin}/sign-in`);
   await visible(heading(page, 'Sign in'));
   await page.getByLabel('E-mail').fill(email);
   await page.getByLabel('Password', { exact: true }).fill(password);
   await page.getByRole('button', { name: 'Sign in', exact: true }).click();
+  await visible(heading(page, 'Overview'));
+  await page.getByRole('navigation', { name: 'Sections' }).filter({ visible: true }).getByRole('link', { name: 'Rooms' }).click();
   await visible(heading(page, 'Rooms'));
 }
 
