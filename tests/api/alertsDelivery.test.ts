@@ -55,6 +55,13 @@ async function freezingRoom() {
   return { now: base + HOUR, roomId };
 }
 
+/** A fresh freezing room, evaluated: a clock at that moment and one message per person waiting in the outbox. */
+async function evaluatedFreeze() {
+  const room = await freezingRoom();
+  await w.evaluate(w.nurseryId, new Date(room.now));
+  return { now: room.now };
+}
+
 const pendingOrSent = async () => OutboxMessage.findAll({ where: { nurseryId: w.nurseryId }, order: [['id', 'ASC']] });
 
 beforeAll(async () => {
@@ -115,11 +122,8 @@ describe('SMTP down for a while, then back', () => {
       },
       close: () => {},
     };
-    const clock = { now: 0 };
+    const clock = await evaluatedFreeze();
     const sender = createOutboxSender({ sequelize: w.t.sequelize, mailer: refusing, clock: () => new Date(clock.now), log: () => {} });
-    const room = await freezingRoom();
-    clock.now = room.now;
-    await w.evaluate(w.nurseryId, new Date(room.now));
     expect(await sender.runOnce()).toMatchObject({ failed: 3, retrying: 0 });
     const rows = (await pendingOrSent()).slice(-3);
     expect(rows.map((r) => [r.status, r.lastError])).toEqual(Array(3).fill(['failed', '550 5.1.1 mailbox unavailable']));
@@ -156,10 +160,7 @@ describe('the app restarted in between', () => {
 
   it('a sender that died mid-send keeps its row only until the lease runs out; then it is sent once', async () => {
     const smtp = await startCaptureServer();
-    const clock = { now: 0 };
-    const room = await freezingRoom();
-    clock.now = room.now;
-    await w.evaluate(w.nurseryId, new Date(clock.now));
+    const clock = await evaluatedFreeze();
 
     // The first instance claims a row and hangs before SMTP accepts anything (a crash at that point).
     const first = openInstance(smtp.url, clock);
@@ -187,10 +188,7 @@ describe('the app restarted in between', () => {
 
   it('the at-least-once window: sent, then died before marking it — the resend carries the same Message-ID', async () => {
     const smtp = await startCaptureServer();
-    const clock = { now: 0 };
-    const room = await freezingRoom();
-    clock.now = room.now;
-    await w.evaluate(w.nurseryId, new Date(clock.now));
+    const clock = await evaluatedFreeze();
     const rows = (await pendingOrSent()).filter((r) => r.status === 'pending');
     const real = createMailer(smtp.url, 'Coldknit <alerts@coldknit.invalid>');
     const headers: string[] = [];
