@@ -52,3 +52,8 @@ export function describeBatches(d: FindingDetail): string | null {
   const batches = d.batches ?? [];
   return batches.length ? batches.map((b) => `${b.code}: ${b.species}, ${b.count} grafts`).join('; ') : null;
 }
+
+/** When the condition began, or "… or earlier" when it began before the stretch the rules trace back. */
+export function describeSince(since: number, d: FindingDetail, r: fmt.Reader): string {
+  return d.sinceCapped ? `${fmt.instant(since, r)} or earlier` : fmt.instant(since, r);
+}

@@ -61,13 +61,15 @@ function judgeSubject(subject: Subject, batches: readonly BatchFacts[], judging:
   const instants = recent.filter((t) => t >= asOf - SINCE_HORIZON_HOURS * MS_PER_HOUR);
   const held = heldState(instants, (t) => (t === asOf ? latest.holds : (judging.judgeAt(t)?.holds ?? false)), { monotone: judging.monotone })!;
   const state = isSettled(held, held.holds ? judging.holdMs : (judging.clearMs ?? judging.holdMs)) ? (held.holds ? 'firing' : 'clear') : 'settling';
+  // The run reaches back past the horizon when it starts at the first instant judged and older readings exist.
+  const sinceCapped = held.since === instants[0] && recent.length > instants.length;
   return {
     ...subject,
     state,
     severity: latest.severity ?? 'warning',
     since: held.since,
     asOf,
-    detail: { ...latest.detail, batches: atStake(batches) },
+    detail: { ...latest.detail, batches: atStake(batches), ...(sinceCapped ? { sinceCapped } : {}) },
   };
 }
 

@@ -84,6 +84,8 @@ export interface FindingDetail {
   lastReadingAt?: number | null;
   maxAgeHours?: number;
   batches?: { id: number; code: string; species: string; count: number }[];
+  /** The condition held further back than the rules trace ("since" is then the horizon, not the start). */
+  sinceCapped?: boolean;
 }
 
 /**

@@ -1,5 +1,5 @@
 import { Link } from 'react-router-dom';
-import { describeBatches, describeCondition, describeLatest } from '../../shared/alerts/describeAlert';
+import { describeBatches, describeCondition, describeLatest, describeSince } from '../../shared/alerts/describeAlert';
 import { instant } from '../../shared/alerts/readerFormat';
 import { RULE_TITLES } from '../../shared/alerts/rules';
 import { NotFoundPage } from '../layout/NotFoundPage';
@@ -26,7 +26,7 @@ function AlertFacts({ alert }: { alert: AlertItem }) {
     { label: 'Severity', value: <SeverityBadge severity={alert.severity} /> },
     { label: 'Status', value: <StatusBadge status={alert.status} /> },
   ];
-  if (alert.since) items.push({ label: 'Since', value: instant(alert.since, reader) });
+  if (alert.since) items.push({ label: 'Since', value: describeSince(alert.since, alert.detail, reader) });
   const latest = describeLatest(alert.detail, reader);
   if (latest) items.push({ label: alert.status === 'resolved' ? 'Last figures' : 'Latest', value: latest });
   const batches = describeBatches(alert.detail);

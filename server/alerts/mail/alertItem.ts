@@ -1,5 +1,5 @@
 // One alert as a block of a message: a heading, facts, what to check, links. Rendered to text and HTML elsewhere.
-import { describeBatches, describeCondition, describeLatest } from '../../../shared/alerts/describeAlert';
+import { describeBatches, describeCondition, describeLatest, describeSince } from '../../../shared/alerts/describeAlert';
 import * as fmt from '../../../shared/alerts/readerFormat';
 import { RULE_TITLES } from '../../../shared/alerts/rules';
 import type { AlertView } from '../alertView';
@@ -33,7 +33,7 @@ function wantsHeat(a: AlertView): boolean {
 export function describeAlert(kind: NoticeKind, a: AlertView, c: ItemContext): MailItem {
   const r = c.reader;
   const facts: [string, string][] = [['What', describeCondition(a, r, c.now)], ['Where', a.subjectName]];
-  if (a.since) facts.push(['Since', fmt.instant(a.since, r)]);
+  if (a.since) facts.push(['Since', describeSince(a.since, a.detail, r)]);
   const latest = describeLatest(a.detail, r);
   if (latest && kind !== 'resolved') facts.push(['Latest', latest]);
   const batches = describeBatches(a.detail);

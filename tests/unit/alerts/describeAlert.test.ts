@@ -1,7 +1,7 @@
 // Alert sentences and figures as a reader sees them. Conversions are checked against NIST SP 811 (2008) App. B.8/B.9:
 // t/°F = 1.8·t/°C + 32 for temperatures, and an interval of 1 °C = 1.8 °F (no offset) for rates and degree-hours.
 import { describe, expect, it } from 'vitest';
-import { describeBatches, describeCondition, describeLatest } from '../../../shared/alerts/describeAlert';
+import { describeBatches, describeCondition, describeLatest, describeSince } from '../../../shared/alerts/describeAlert';
 import * as fmt from '../../../shared/alerts/readerFormat';
 
 const C = { unit: 'C' as const, timeZone: 'America/Chicago' };
@@ -51,6 +51,11 @@ describe('alert sentences', () => {
     expect(describeCondition({ rule: 'silent_logger', detail: { loggerLabel: 'K-02', lastReadingAt: null, maxAgeHours: 26 } }, C, at)).toBe(
       'K-02 has sent no reading at all for more than 26 h.',
     );
+  });
+
+  it('a start traced only as far as the horizon reads "or earlier"', () => {
+    expect(describeSince(at, { sinceCapped: true }, C)).toBe('Wed 15 Jan, 04:00 GMT-6 or earlier');
+    expect(describeSince(at, {}, C)).toBe('Wed 15 Jan, 04:00 GMT-6');
   });
 
   it('the latest reading with its logger and trend, and the batches at stake', () => {

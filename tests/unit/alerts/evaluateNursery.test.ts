@@ -26,6 +26,15 @@ describe('freeze risk', () => {
     });
   });
 
+  it('a condition older than the 24 h horizon says its start is that far back "or earlier"', () => {
+    const readings = sampled(T0, T0 + 30 * HOUR, () => -3);
+    const f = pick(evaluateNursery(nursery(room(readings)), noOverrides, T0 + 30 * HOUR), 'freeze_risk');
+    expect(f).toMatchObject({ state: 'firing', since: T0 + 6 * HOUR, detail: { sinceCapped: true } });
+    const fresh = pick(evaluateNursery(nursery(room(readings.slice(0, 13))), noOverrides, T0 + 2 * HOUR), 'freeze_risk');
+    expect(fresh.since).toBe(T0);
+    expect(fresh.detail.sinceCapped).toBeUndefined();
+  });
+
   it('clears once the room has been above the limit and off the falling trend for the hold time', () => {
     const readings = [...sampled(T0, T0 + HOUR, () => -3), ...sampled(T0 + 70 * MIN, T0 + 3 * HOUR, () => 4)];
     expect(pick(evaluateNursery(nursery(room(readings)), noOverrides, T0 + 3 * HOUR), 'freeze_risk').state).toBe('clear');
