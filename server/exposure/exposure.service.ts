@@ -24,7 +24,7 @@ async function figuresFor(pool: Pool, nurseryId: number, scope: BatchScope, view
   }
   if (stale.length) {
     const entries = await computeFigures(pool, stale, inputs, parts, now);
-    await writeCache(pool, nurseryId, entries);
+    await writeCache(pool, nurseryId, entries, view);
     for (const e of entries) figures.set(e.batchId, e.figures);
   }
   return { inputs, figures };

@@ -42,13 +42,17 @@ export interface CachedFigures {
 
 export type CacheView = 'summary' | 'detail';
 
-/** Cached rows of the nursery (or of one batch): `summary` for the nursery table, `detail` for a batch page. */
+/**
+ * Cached rows of the nursery (or of one batch): `summary` for the nursery table, `detail` for a batch page. The
+ * nursery table stores summaries only (its detail column stays empty until that batch's page is opened), so a row
+ * without the view asked for is no row at all.
+ */
 export async function readCache(pool: Pool, nurseryId: number, view: CacheView, batchId?: number): Promise<Map<number, CachedFigures>> {
   const column = view === 'summary' ? 'summary' : 'detail';
   const rows = (await pool.query(
     {
       sql: `SELECT batch_id, stamp, CAST(UNIX_TIMESTAMP(valid_until) * 1000 AS SIGNED), ${column}
-              FROM batch_exposure_cache WHERE nursery_id = ?${batchId === undefined ? '' : ' AND batch_id = ?'}`,
+              FROM batch_exposure_cache WHERE nursery_id = ?${batchId === undefined ? '' : ' AND batch_id = ?'} AND ${column} <> ''`,
       rowsAsArray: true,
     },
     batchId === undefined ? [nurseryId] : [nurseryId, batchId],
@@ -70,20 +74,32 @@ export interface CacheEntry {
 /** The table view keeps the headline only; the detail keeps every placement and logger. */
 const summaryOf = (figures: BatchFigures): BatchFigures => ({ ...figures, placements: [] });
 
-export async function writeCache(pool: Pool, nurseryId: number, entries: CacheEntry[]): Promise<void> {
-  if (entries.length === 0) return;
-  await pool.batch(
-    `INSERT INTO batch_exposure_cache (batch_id, nursery_id, stamp, computed_at, valid_until, summary, detail) VALUES (?, ?, ?, ?, ?, ?, ?)
-     ON DUPLICATE KEY UPDATE stamp = VALUES(stamp), computed_at = VALUES(computed_at), valid_until = VALUES(valid_until),
-                             summary = VALUES(summary), detail = VALUES(detail)`,
-    entries.map((e) => [
-      e.batchId,
-      nurseryId,
-      e.stamp,
-      sqlInstant(e.figures.computedAt),
-      e.validUntil === null ? null : sqlInstant(e.validUntil),
-      JSON.stringify(summaryOf(e.figures)),
-      JSON.stringify(e.figures),
-    ]),
-  );
+/** Rows per INSERT: a few hundred kB of JSON per statement, well under max_allowed_packet. */
+const WRITE_CHUNK = 100;
+
+/**
+ * Stores the summary always and the detail only for the detail view: every batch's detail would add megabytes to
+ * the nursery table's cold computation for pages nobody may open. Multi-row INSERTs through the text protocol rather
+ * than batch(): the connector's bulk path (3.0.2) has been seen to garble long string values that straddle its
+ * packet boundaries ("Incorrect string value" from the server).
+ */
+export async function writeCache(pool: Pool, nurseryId: number, entries: CacheEntry[], view: CacheView): Promise<void> {
+  for (let start = 0; start < entries.length; start += WRITE_CHUNK) {
+    const chunk = entries.slice(start, start + WRITE_CHUNK);
+    await pool.query(
+      `INSERT INTO batch_exposure_cache (batch_id, nursery_id, stamp, computed_at, valid_until, summary, detail)
+       VALUES ${chunk.map(() => '(?, ?, ?, ?, ?, ?, ?)').join(', ')}
+       ON DUPLICATE KEY UPDATE stamp = VALUES(stamp), computed_at = VALUES(computed_at), valid_until = VALUES(valid_until),
+                               summary = VALUES(summary), detail = VALUES(detail)`,
+      chunk.flatMap((e) => [
+        e.batchId,
+        nurseryId,
+        e.stamp,
+        sqlInstant(e.figures.computedAt),
+        e.validUntil === null ? null : sqlInstant(e.validUntil),
+        JSON.stringify(summaryOf(e.figures)),
+        view === 'detail' ? JSON.stringify(e.figures) : '',
+      ]),
+    );
+  }
 }

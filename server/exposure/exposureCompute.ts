@@ -51,16 +51,26 @@ function groupDemands(plans: BatchPlan[]) {
 }
 
 /**
- * Reads each logger's series over the span its demands need and answers every demand through the engine, one
- * logger at a time (only one logger's readings are held at once). Also notes loggers holding readings after `now`.
+ * Reads each logger's series over the span its demands need and answers every demand through the engine. The next
+ * logger's read is already under way while this one is computed, so the database streams while the engine runs;
+ * at most two loggers' readings are held at once. Also notes loggers holding readings after `now`.
  */
 async function solveDemands(pool: Pool, plans: BatchPlan[], now: number) {
   const answers = new Map<string, Exposure>();
   const ahead = new Set<number>();
-  for (const [loggerId, groups] of groupDemands(plans)) {
+  const work = [...groupDemands(plans)].map(([loggerId, groups]) => {
     const entries = [...groups.values()].map(({ profile, demands }) => ({ options: engineOptions(profile), windows: [...demands.values()] }));
     const all = entries.flatMap((e) => e.windows);
-    const series = await loadSeries(pool, loggerId, Math.min(...all.map((d) => d.from)), Math.max(...all.map((d) => d.to)));
+    return { loggerId, entries, from: Math.min(...all.map((d) => d.from)), to: Math.max(...all.map((d) => d.to)) };
+  });
+  const read = (i: number) => loadSeries(pool, work[i].loggerId, work[i].from, work[i].to);
+  let next = work.length ? read(0) : null;
+  for (let i = 0; i < work.length; i++) {
+    const series = await next!;
+    next = i + 1 < work.length ? read(i + 1) : null;
+    // Attached at once: should this read fail while the engine runs, the error waits for the await above.
+    next?.catch(() => undefined);
+    const { loggerId, entries } = work[i];
     if (series.t.length && series.t[series.t.length - 1] > now) ahead.add(loggerId);
     for (const { options, windows } of entries) {
       const results = exposuresOverWindows(series, windows, options);
