@@ -69,6 +69,8 @@ export async function moveLogger(sequelize: Sequelize, nurseryId: number, id: nu
   // A placement records where the logger was; a move planned for later would make "where it is now" wrong until then.
   if (at.getTime() > Date.now() + FUTURE_SLACK_MS) throw conflict('move_in_future', 'A move cannot be dated in the future; record it when it happens.');
   await sequelize.transaction(async (transaction: Transaction) => {
+    // Lock the logger row first, so two moves at once queue up instead of deadlocking on the placement rows.
+    await Logger.findOne({ where: { id, nurseryId }, lock: transaction.LOCK.UPDATE, transaction });
     const latest = await LoggerPlacement.findOne({
       where: { loggerId: id },
       order: [['placedFrom', 'DESC']],

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { roomBody, roomPatch } from '../../shared/schemas/rooms';
 import { conflict, notFound } from '../http/errors';
+import { BatchPlacement } from '../batches/batchPlacement.model';
 import { LoggerPlacement } from '../loggers/loggerPlacement.model';
 import { Room } from './room.model';
 
@@ -25,11 +26,12 @@ export async function updateRoom(nurseryId: number, id: number, patch: z.output<
   return (await room.update(patch)).toPublic();
 }
 
-/** A room that ever held a logger keeps its history; only an unused room can be deleted. */
+/** A room that ever held a logger or a batch keeps its history; only an unused room can be deleted. */
 export async function deleteRoom(nurseryId: number, id: number) {
   const room = await findRoom(nurseryId, id);
-  if (await LoggerPlacement.count({ where: { roomId: id } })) {
-    throw conflict('room_in_use', 'This room has logger history; rename it or add a note instead of deleting it.');
+  const [loggers, batches] = await Promise.all([LoggerPlacement.count({ where: { roomId: id } }), BatchPlacement.count({ where: { roomId: id } })]);
+  if (loggers + batches > 0) {
+    throw conflict('room_in_use', 'This room has logger or batch history; rename it or add a note instead of deleting it.');
   }
   await room.destroy();
 }

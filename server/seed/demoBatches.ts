@@ -1,5 +1,6 @@
 // The demo nursery's grafts: invented cultivars on common rootstock types, made in the first weeks of the season,
-// some callused warm and then moved to cold storage, one moved out of the garage before a cold night, one lost.
+// warm-callused species kept in the heated room (one out for two nights while its heater was serviced), apples
+// and pears in cold storage, one moved out of the garage before a cold night, one lost.
 import type { Sequelize } from 'sequelize';
 import type { BatchStatus } from '../../shared/schemas/batches';
 import { Batch } from '../batches/batch.model';
@@ -49,22 +50,22 @@ export const DEMO_BATCHES: DemoBatch[] = [
   },
   {
     species: 'plum', scion: 'Greyfield Gage', rootstock: 'plum seedling', method: 'whip-and-tongue', count: 28, graftedDay: 4, grafter: WREN, medium: 'moist sawdust',
-    stays: [{ room: 'Callus room', day: 4, hour: 15 }, { room: 'Crisper fridge', day: 16, hour: 10 }],
+    stays: [{ room: 'Callus room', day: 4, hour: 15 }],
   },
   {
     species: 'plum', scion: 'Dusk Damson', rootstock: 'plum seedling', method: 'saddle', count: 18, graftedDay: 6, grafter: TAMSIN, medium: 'moist sawdust',
-    stays: [{ room: 'Callus room', day: 6, hour: 14 }, { room: 'Crisper fridge', day: 18, hour: 10 }],
+    stays: [{ room: 'Callus room', day: 6, hour: 14 }],
   },
   { species: 'peach', scion: 'Ember Cling', rootstock: 'peach seedling', method: 'chip bud', count: 12, graftedDay: 8, grafter: WREN, medium: 'peat', stays: [{ room: 'Callus room', day: 8, hour: 13 }] },
   {
     species: 'walnut', scion: 'Broadleaf Thinshell', rootstock: 'walnut seedling', method: 'omega', count: 20, graftedDay: 2, grafter: JORY, medium: 'peat',
-    stays: [{ room: 'Callus room', day: 2, hour: 16 }, { room: 'Root cellar', day: 27, hour: 11 }],
+    stays: [{ room: 'Callus room', day: 2, hour: 16 }],
   },
   { species: 'walnut', scion: 'Tallow Ridge', rootstock: 'walnut seedling', method: 'side-veneer', count: 15, graftedDay: 10, grafter: JORY, medium: 'peat', stays: [{ room: 'Callus room', day: 10, hour: 16 }] },
   {
     species: 'chestnut', scion: 'Marrowfield', rootstock: 'chestnut seedling', method: 'cleft', count: 20, graftedDay: 6, grafter: WREN, medium: 'wood shavings',
     notes: 'Out of the callus room while the heater was serviced; two nights in the garage.',
-    stays: [{ room: 'Callus room', day: 6, hour: 17 }, { room: 'North garage', day: 22, hour: 8 }, { room: 'Root cellar', day: 24, hour: 9 }],
+    stays: [{ room: 'Callus room', day: 6, hour: 17 }, { room: 'North garage', day: 22, hour: 8 }, { room: 'Callus room', day: 24, hour: 9 }],
   },
   { species: 'chestnut', scion: 'Copper Burr', rootstock: 'chestnut seedling', method: 'cleft', count: 14, graftedDay: 13, grafter: TAMSIN, medium: 'wood shavings', stays: [{ room: 'Callus room', day: 13, hour: 15 }] },
 ];

@@ -10,6 +10,7 @@ import { Button } from '../ui/Button';
 import { Field, Input } from '../ui/Field';
 import { FormActions } from '../ui/FormActions';
 import { PageHeader } from '../ui/PageHeader';
+import { GraftingSafetyNote } from '../ui/SafetyNote';
 import { Panel } from '../ui/Panel';
 import { QueryResult } from '../ui/QueryResult';
 import { useZodForm } from '../ui/useZodForm';
@@ -120,6 +121,9 @@ export function GraftingDayPage() {
   return (
     <>
       <PageHeader title="Record a grafting day" back={{ to: '/batches', label: 'Batches' }} />
+      <div className="mb-6">
+        <GraftingSafetyNote />
+      </div>
       <QueryResult query={rooms} loading="Loading rooms…" failed="Could not load the rooms">
         {(roomList) => (
           <QueryResult query={profiles} loading="Loading species…" failed="Could not load the species profiles">

@@ -2,16 +2,16 @@ import { describe, expect, it } from 'vitest';
 import { signIn } from '../support/testApp';
 import { openAccountMenu, signInWithForm, signOut } from './support/actions';
 import { useBrowserSuite } from './support/browserApp';
-import { heading, openPage, recordPage, sectionNav, visible, WIDTHS } from './support/browser';
+import { goToSection, heading, openPage, recordPage, visible, WIDTHS } from './support/browser';
 
 const suite = useBrowserSuite();
 
 describe.each(WIDTHS)('an owner at %i px wide', (width) => {
 
-  it('signs in by picking a demo account, and lands on the rooms list', async () => {
+  it('signs in by picking a demo account, and lands on the overview', async () => {
     const t = suite.app();
     const { page, problems } = await openPage(suite.browser(), width);
-    await page.goto(`${t.origin}/rooms`);
+    await page.goto(`${t.origin}/`);
     // Signed out, the app sends the visitor to sign-in first.
     await visible(heading(page, 'Sign in'));
     await recordPage(page, 'sign-in');
@@ -87,7 +87,7 @@ describe.each(WIDTHS)('an owner at %i px wide', (width) => {
     expect(saved.placements[0].from).toBe('2026-11-20T14:30:00.000Z');
     expect(saved.placements[0].to).toBe(saved.placements[1].from);
 
-    await sectionNav(page).getByRole('link', { name: 'Rooms' }).click();
+    await goToSection(page, 'Rooms');
     await page.getByRole('link', { name: room }).click();
     await visible(page.getByRole('heading', { name: 'Loggers here before' }));
     await recordPage(page, 'room-detail');
@@ -107,7 +107,7 @@ describe.each(WIDTHS)('an owner at %i px wide', (width) => {
     await visible(page.getByRole('alert').filter({ hasText: 'has logger history' }));
     await page.getByRole('button', { name: 'Keep it' }).click();
     await visible(page.getByRole('button', { name: 'Delete' }));
-    await sectionNav(page).getByRole('link', { name: 'Loggers' }).click();
+    await goToSection(page, 'Loggers');
     await visible(heading(page, 'Loggers'));
     await visible(page.getByRole('link', { name: label }));
     await recordPage(page, 'loggers');
@@ -120,7 +120,7 @@ describe.each(WIDTHS)('an owner at %i px wide', (width) => {
     const { page, problems, expect: tolerate } = await openPage(suite.browser(), width);
     await signInWithForm(page, t.origin, 'owner@example.com');
     const email = `fern.${width}@example.com`;
-    await sectionNav(page).getByRole('link', { name: 'Settings' }).click();
+    await goToSection(page, 'Settings');
     await visible(heading(page, 'Settings'));
     const invitations = page.getByRole('region', { name: 'Invitations' });
     await invitations.getByLabel('E-mail').fill(email);
@@ -171,7 +171,7 @@ describe.each(WIDTHS)('an owner at %i px wide', (width) => {
     await visible(page.getByRole('button', { name: /Fern Idlewild/ }));
     // Staff edit rooms but do not manage people.
     await visible(page.getByRole('link', { name: 'Add room' }));
-    await sectionNav(page).getByRole('link', { name: 'Settings' }).click();
+    await goToSection(page, 'Settings');
     await visible(page.getByText('Only an owner can change these.'));
     expect(await page.getByRole('region', { name: 'People' }).count()).toBe(0);
     await signOut(page);

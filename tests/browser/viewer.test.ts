@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { signInWithForm } from './support/actions';
 import { useBrowserSuite } from './support/browserApp';
-import { heading, openPage, recordPage, sectionNav, visible, WIDTHS } from './support/browser';
+import { goToSection, heading, openPage, recordPage, visible, WIDTHS } from './support/browser';
 
 /** Labels of every control that changes data; a viewer must meet none of them (the server refuses them anyway). */
 const WRITE_CONTROLS = /^(Add room|Add logger|Add a logger here|Edit|Delete|Record move|Send invitation|Create token|Save nursery|Remove|Revoke)$/;
@@ -32,11 +32,11 @@ describe.each(WIDTHS)('a viewer at %i px wide', (width) => {
     expect(await writeControls().count()).toBe(0);
     await recordPage(page, 'viewer-logger-detail');
 
-    await sectionNav(page).getByRole('link', { name: 'Loggers' }).click();
+    await goToSection(page, 'Loggers');
     await visible(page.getByRole('link', { name: 'K-05' }));
     expect(await writeControls().count()).toBe(0);
 
-    await sectionNav(page).getByRole('link', { name: 'Settings' }).click();
+    await goToSection(page, 'Settings');
     await visible(page.getByText('America/Chicago'));
     expect(await page.getByRole('textbox').count()).toBe(0);
     expect(await writeControls().count()).toBe(0);

@@ -1,5 +1,5 @@
 import type { Page } from 'playwright-core';
-import { heading, visible } from './browser';
+import { goToSection, heading, visible } from './browser';
 
 /** Signs in through the form, the way a person does, lands on the overview, and goes on to the rooms list. */
 export async function signInWithForm(page: Page, origin: string, email: string, password = 'coldknit-demo'): Promise<void> {
@@ -9,7 +9,7 @@ export async function signInWithForm(page: Page, origin: string, email: string, 
   await page.getByLabel('Password', { exact: true }).fill(password);
   await page.getByRole('button', { name: 'Sign in', exact: true }).click();
   await visible(heading(page, 'Overview'));
-  await page.getByRole('navigation', { name: 'Sections' }).filter({ visible: true }).getByRole('link', { name: 'Rooms' }).click();
+  await goToSection(page, 'Rooms');
   await visible(heading(page, 'Rooms'));
 }
 

@@ -121,3 +121,11 @@ export async function recordPage(page: Page, name: string): Promise<void> {
   await screenshot(page, name);
   await assertAccessible(page);
 }
+
+/** Opens a section the way a person would: from the section bar, or on phones through "More" when it is not on the bar. */
+export async function goToSection(page: Page, name: string): Promise<void> {
+  const link = sectionNav(page).getByRole('link', { name, exact: true });
+  if ((await link.count()) > 0) return link.click();
+  await sectionNav(page).getByRole('link', { name: 'More', exact: true }).click();
+  await page.getByRole('main').getByRole('link', { name, exact: true }).click();
+}
