@@ -49,6 +49,18 @@ describe('rooms and loggers with placement history', () => {
     expect(res.body.error.code).toBe('move_in_future');
   });
 
+  it('keeps a room that only ever held a batch', async () => {
+    const room = (await staff.post('/api/rooms').send({ name: 'Spare shed', kind: 'other' })).body.id;
+    const batch = await staff.post('/api/batches').send({
+      species: 'apple', scionCultivar: 'Test Pippin', rootstock: 'M.111', method: 'cleft', count: 5,
+      graftedOn: '2026-11-20', roomId: room, placedAt: '2026-11-20T12:00:00Z',
+    });
+    expect(batch.status).toBe(201);
+    const res = await staff.delete(`/api/rooms/${room}`);
+    expect(res.status).toBe(409);
+    expect(res.body.error.code).toBe('room_in_use');
+  });
+
   it('keeps a room with history', async () => {
     const cellar = (await staff.get('/api/rooms')).body.find((r: { name: string }) => r.name === 'Root cellar').id;
     const res = await staff.delete(`/api/rooms/${cellar}`);
