@@ -1,5 +1,5 @@
 // One pass over time-ordered readings, O(1) memory: the exposure of a joined line inside a clip window.
-import { createCallusIntegrator, describeCallusModelProblem, type CallusIntegrator } from './callusRate';
+import { createCallusIntegrator, describeCallusModelProblem, type CallusIntegrator, type CallusModel } from './callusRate';
 import { LimitTally } from './limitTally';
 import type { Exposure, ExposureOptions, Reading } from './types';
 
@@ -38,44 +38,94 @@ function checkOptions(opts: ExposureOptions): void {
  */
 export function createExposureAccumulator(opts: ExposureOptions): ExposureAccumulator {
   checkOptions(opts);
-  const maxGapMs = (opts.maxGapMinutes ?? DEFAULT_MAX_GAP_MINUTES) * MS_PER_MINUTE;
-  const from = opts.from ?? -Infinity;
-  const to = opts.to ?? Infinity;
-  const below = new LimitTally(opts.band.minC, 'below');
-  const above = new LimitTally(opts.band.maxC, 'above');
-  const freeze = new LimitTally(opts.freezeC, 'below');
-  const callusModel = opts.callus;
-  const callus: CallusIntegrator | null = callusModel ? createCallusIntegrator(callusModel) : null;
+  return new RunningExposure(opts);
+}
 
-  let coveredMs = 0;
-  let integralCH = 0;
-  let optimumEquivalentHours = 0;
-  let minC = Infinity;
-  let maxC = -Infinity;
-  let firstT = NaN;
-  let lastT = NaN;
-  let prevT = NaN;
-  let prevC = NaN;
+/**
+ * The running totals live in one object's fields rather than in closure variables: V8 boxes every write of
+ * a number held in a closure into a fresh heap object, while an object's number fields are updated in place,
+ * so a push allocates nothing.
+ */
+class RunningExposure implements ExposureAccumulator {
+  private readonly maxGapMs: number;
+  private readonly from: number;
+  private readonly to: number;
+  private readonly below: LimitTally;
+  private readonly above: LimitTally;
+  private readonly freeze: LimitTally;
+  private readonly callusModel: CallusModel | undefined;
+  private readonly callus: CallusIntegrator | null;
+  private coveredMs = 0;
+  private integralCH = 0;
+  private optimumEquivalentHours = 0;
+  private minC = Infinity;
+  private maxC = -Infinity;
+  private firstT = NaN;
+  private lastT = NaN;
+  private prevT = NaN;
+  private prevC = NaN;
 
-  function noteValue(c: number): void {
-    if (c < minC) minC = c;
-    if (c > maxC) maxC = c;
+  constructor(private readonly opts: ExposureOptions) {
+    this.maxGapMs = (opts.maxGapMinutes ?? DEFAULT_MAX_GAP_MINUTES) * MS_PER_MINUTE;
+    this.from = opts.from ?? -Infinity;
+    this.to = opts.to ?? Infinity;
+    this.below = new LimitTally(opts.band.minC, 'below');
+    this.above = new LimitTally(opts.band.maxC, 'above');
+    this.freeze = new LimitTally(opts.freezeC, 'below');
+    this.callusModel = opts.callus;
+    this.callus = opts.callus ? createCallusIntegrator(opts.callus) : null;
   }
 
-  function addPiece(startT: number, startC: number, endT: number, endC: number): void {
-    const ms = endT - startT;
-    const h = ms / MS_PER_HOUR;
-    coveredMs += ms;
-    integralCH += (h * (startC + endC)) / 2;
-    below.addPiece(startC, endC, h);
-    above.addPiece(startC, endC, h);
-    freeze.addPiece(startC, endC, h);
-    if (callus) optimumEquivalentHours += callus.integratePiece(startC, endC, h);
+  push(t: number, c: number): void {
+    if (!Number.isFinite(t) || !Number.isFinite(c)) throw new Error(`reading (${t}, ${c}) is not a pair of finite numbers`);
+    const prevT = this.prevT;
+    if (t < prevT) throw new Error(`readings out of time order: ${t} after ${prevT}`);
+    if (t >= this.from && t <= this.to) {
+      this.noteValue(c);
+      if (Number.isNaN(this.firstT)) this.firstT = t;
+      this.lastT = t;
+    }
+    if (t - prevT <= this.maxGapMs) this.addJoined(prevT, this.prevC, t, c);
+    this.prevT = t;
+    this.prevC = c;
   }
 
-  function addJoined(t0: number, c0: number, t1: number, c1: number): void {
-    const startT = Math.max(t0, from);
-    const endT = Math.min(t1, to);
+  result(): Exposure {
+    const { opts, callusModel, coveredMs, minC, maxC, integralCH, optimumEquivalentHours } = this;
+    const spanStart = opts.from ?? this.firstT;
+    const spanEnd = opts.to ?? this.lastT;
+    const spanMs = Number.isNaN(spanStart) || Number.isNaN(spanEnd) ? coveredMs : spanEnd - spanStart;
+    const hoursCovered = coveredMs / MS_PER_HOUR;
+    const seen = minC <= maxC;
+    const exposure: Exposure = {
+      hoursCovered,
+      hoursMissing: (spanMs - coveredMs) / MS_PER_HOUR,
+      minC: seen ? minC : null,
+      maxC: seen ? maxC : null,
+      meanC: coveredMs > 0 ? integralCH / hoursCovered : null,
+      below: this.below.toLimitExposure(),
+      above: this.above.toLimitExposure(),
+      freeze: this.freeze.toLimitExposure(),
+      integralCH,
+    };
+    if (callusModel) {
+      exposure.callus = {
+        optimumEquivalentHours,
+        hoursAtOptimum: callusModel.hoursAtOptimum,
+        progressPct: (100 * optimumEquivalentHours) / callusModel.hoursAtOptimum,
+      };
+    }
+    return exposure;
+  }
+
+  private noteValue(c: number): void {
+    if (c < this.minC) this.minC = c;
+    if (c > this.maxC) this.maxC = c;
+  }
+
+  private addJoined(t0: number, c0: number, t1: number, c1: number): void {
+    const startT = Math.max(t0, this.from);
+    const endT = Math.min(t1, this.to);
     if (endT <= startT) return;
     const rise = c1 - c0;
     const duration = t1 - t0;
@@ -83,56 +133,25 @@ export function createExposureAccumulator(opts: ExposureOptions): ExposureAccumu
     let endC = c1;
     if (startT > t0) {
       startC = c0 + rise * ((startT - t0) / duration);
-      noteValue(startC);
+      this.noteValue(startC);
     }
     if (endT < t1) {
       endC = c0 + rise * ((endT - t0) / duration);
-      noteValue(endC);
+      this.noteValue(endC);
     }
-    addPiece(startT, startC, endT, endC);
+    this.addPiece(startT, startC, endT, endC);
   }
 
-  return {
-    push(t, c) {
-      if (!Number.isFinite(t) || !Number.isFinite(c)) throw new Error(`reading (${t}, ${c}) is not a pair of finite numbers`);
-      if (t < prevT) throw new Error(`readings out of time order: ${t} after ${prevT}`);
-      if (t >= from && t <= to) {
-        noteValue(c);
-        if (Number.isNaN(firstT)) firstT = t;
-        lastT = t;
-      }
-      if (t - prevT <= maxGapMs) addJoined(prevT, prevC, t, c);
-      prevT = t;
-      prevC = c;
-    },
-
-    result() {
-      const spanStart = opts.from ?? firstT;
-      const spanEnd = opts.to ?? lastT;
-      const spanMs = Number.isNaN(spanStart) || Number.isNaN(spanEnd) ? coveredMs : spanEnd - spanStart;
-      const hoursCovered = coveredMs / MS_PER_HOUR;
-      const seen = minC <= maxC;
-      const exposure: Exposure = {
-        hoursCovered,
-        hoursMissing: (spanMs - coveredMs) / MS_PER_HOUR,
-        minC: seen ? minC : null,
-        maxC: seen ? maxC : null,
-        meanC: coveredMs > 0 ? integralCH / hoursCovered : null,
-        below: below.toLimitExposure(),
-        above: above.toLimitExposure(),
-        freeze: freeze.toLimitExposure(),
-        integralCH,
-      };
-      if (callusModel) {
-        exposure.callus = {
-          optimumEquivalentHours,
-          hoursAtOptimum: callusModel.hoursAtOptimum,
-          progressPct: (100 * optimumEquivalentHours) / callusModel.hoursAtOptimum,
-        };
-      }
-      return exposure;
-    },
-  };
+  private addPiece(startT: number, startC: number, endT: number, endC: number): void {
+    const ms = endT - startT;
+    const h = ms / MS_PER_HOUR;
+    this.coveredMs += ms;
+    this.integralCH += (h * (startC + endC)) / 2;
+    this.below.addPiece(startC, endC, h);
+    this.above.addPiece(startC, endC, h);
+    this.freeze.addPiece(startC, endC, h);
+    if (this.callus) this.optimumEquivalentHours += this.callus.integratePiece(startC, endC, h);
+  }
 }
 
 /** The accumulator run over a whole series (array or any iterable, e.g. rows streamed from the database). */

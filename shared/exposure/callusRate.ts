@@ -47,25 +47,45 @@ export interface CallusIntegrator {
  * breakpoint leaves sub-pieces on which the rate is linear in t: the trapezoid rule is then exact.
  */
 export function createCallusIntegrator(curve: CallusRateCurve): CallusIntegrator {
-  const rising = [curve.baseC, curve.optLowC, curve.optHighC, curve.upperC];
-  const falling = [...rising].reverse();
-  return {
-    integratePiece(c0, c1, h) {
-      if (c0 === c1) return h * callusRate(curve, c0);
-      const span = c1 - c0;
-      let doneFraction = 0;
-      let doneRate = callusRate(curve, c0);
-      let total = 0;
-      for (const breakpoint of span > 0 ? rising : falling) {
-        const fraction = (breakpoint - c0) / span;
-        if (fraction <= doneFraction || fraction >= 1) continue;
-        const rate = callusRate(curve, breakpoint);
-        total += ((fraction - doneFraction) * (doneRate + rate)) / 2;
-        doneFraction = fraction;
-        doneRate = rate;
-      }
-      total += ((1 - doneFraction) * (doneRate + callusRate(curve, c1))) / 2;
-      return total * h;
-    },
-  };
+  return new PiecewiseCallusIntegrator(curve);
+}
+
+/**
+ * Runs once per joined piece, so it keeps its own copy of the curve (callers pass objects of many shapes,
+ * which would make every field read in callusRate a slow lookup) and walks its breakpoints by index.
+ */
+class PiecewiseCallusIntegrator implements CallusIntegrator, CallusRateCurve {
+  readonly baseC: number;
+  readonly optLowC: number;
+  readonly optHighC: number;
+  readonly upperC: number;
+  private readonly rising: readonly number[];
+
+  constructor(curve: CallusRateCurve) {
+    this.baseC = curve.baseC;
+    this.optLowC = curve.optLowC;
+    this.optHighC = curve.optHighC;
+    this.upperC = curve.upperC;
+    this.rising = [curve.baseC, curve.optLowC, curve.optHighC, curve.upperC];
+  }
+
+  integratePiece(c0: number, c1: number, h: number): number {
+    if (c0 === c1) return h * callusRate(this, c0);
+    const span = c1 - c0;
+    const last = this.rising.length - 1;
+    let doneFraction = 0;
+    let doneRate = callusRate(this, c0);
+    let total = 0;
+    for (let i = 0; i <= last; i++) {
+      const breakpoint = this.rising[span > 0 ? i : last - i];
+      const fraction = (breakpoint - c0) / span;
+      if (fraction <= doneFraction || fraction >= 1) continue;
+      const rate = callusRate(this, breakpoint);
+      total += ((fraction - doneFraction) * (doneRate + rate)) / 2;
+      doneFraction = fraction;
+      doneRate = rate;
+    }
+    total += ((1 - doneFraction) * (doneRate + callusRate(this, c1))) / 2;
+    return total * h;
+  }
 }
