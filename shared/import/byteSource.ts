@@ -45,31 +45,49 @@ const LF = 0x0a;
 const CR = 0x0d;
 
 /**
- * Reads about `wantBytes` from the start of the file for detection, never holding more than
- * `maxLineBytes` while still looking for the end of the first line.
+ * Reads the first `wantBytes` of the file for detection (or, when the first line is longer, that line and
+ * `wantBytes` after it), never holding more than `maxLineBytes` while still looking for the end of the
+ * first line. The prefix is cut to that size whatever the source's chunks: a 1 MiB read-stream chunk
+ * would otherwise make detection split and check some 35,000 rows instead of about 2,000.
  */
 export async function readPrefix(source: ByteSourceFactory, wantBytes: number, maxLineBytes: number): Promise<Prefix> {
   const chunks: Uint8Array[] = [];
   let length = 0;
-  let sawLineEnd = false;
-  let complete = true;
+  let firstLineEnd = -1;
   for await (const chunk of readSource(source)) {
+    if (firstLineEnd === -1) {
+      const at = lineEndIn(chunk);
+      if (at !== -1) firstLineEnd = length + at;
+    }
     chunks.push(chunk);
     length += chunk.length;
-    if (!sawLineEnd) sawLineEnd = chunk.includes(LF) || chunk.includes(CR);
-    if (!sawLineEnd && length > maxLineBytes) throw lineTooLong(1, maxLineBytes);
-    if (length >= wantBytes && sawLineEnd) {
-      complete = false;
-      break;
+    if (firstLineEnd === -1) {
+      if (length > maxLineBytes) throw lineTooLong(1, maxLineBytes);
+      continue;
     }
+    const enough = firstLineEnd < wantBytes ? wantBytes : firstLineEnd + 1 + wantBytes;
+    if (length >= enough) return { bytes: joined(chunks, enough), complete: false };
   }
-  const bytes = new Uint8Array(length);
+  return { bytes: joined(chunks, length), complete: true };
+}
+
+function lineEndIn(chunk: Uint8Array): number {
+  const lf = chunk.indexOf(LF);
+  const cr = chunk.indexOf(CR);
+  return lf === -1 || (cr !== -1 && cr < lf) ? cr : lf;
+}
+
+/** The first `size` bytes of the chunks, as one array. */
+function joined(chunks: Uint8Array[], size: number): Uint8Array {
+  const bytes = new Uint8Array(size);
   let offset = 0;
   for (const chunk of chunks) {
-    bytes.set(chunk, offset);
-    offset += chunk.length;
+    if (offset >= size) break;
+    const part = chunk.length <= size - offset ? chunk : chunk.subarray(0, size - offset);
+    bytes.set(part, offset);
+    offset += part.length;
   }
-  return { bytes, complete };
+  return bytes;
 }
 
 export function lineTooLong(line: number | null, maxLineBytes: number): ImportError {
