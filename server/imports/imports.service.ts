@@ -180,12 +180,21 @@ class ImportRun {
   async begin(detection: Detection): Promise<void> {
     const named = this.settings.logger ?? detection.loggerHint;
     if (this.settings.dryRun && !named) return;
+    if (this.settings.dryRun) {
+      // A preview still shows a file that names a logger this nursery does not know: the person picks one next.
+      // A logger the person named themselves must exist.
+      this.logger = await resolveLogger(this.auth.nurseryId, this.settings.logger, detection).catch((err: unknown) => {
+        if (this.settings.logger) throw err;
+        return null;
+      });
+      if (this.logger) this.conn = await this.pool.getConnection();
+      return;
+    }
     this.logger = this.append
       ? await Logger.findByPk(this.append.base.loggerId!)
       : await resolveLogger(this.auth.nurseryId, this.settings.logger, detection);
     if (!this.logger) throw notFound('The logger of the earlier import this file continues');
     this.conn = await this.pool.getConnection();
-    if (this.settings.dryRun) return;
     this.record = await Import.create({
       nurseryId: this.auth.nurseryId, loggerId: this.logger.id, userId: this.auth.userId, tokenId: this.auth.tokenId,
       fileName: this.file.name, fileSha256: this.digest.sha256, fileBytes: this.digest.bytes, status: 'running',
