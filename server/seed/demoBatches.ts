@@ -61,7 +61,11 @@ export const DEMO_BATCHES: DemoBatch[] = [
     species: 'walnut', scion: 'Broadleaf Thinshell', rootstock: 'walnut seedling', method: 'omega', count: 20, graftedDay: 2, grafter: JORY, medium: 'peat',
     stays: [{ room: 'Callus room', day: 2, hour: 16 }],
   },
-  { species: 'walnut', scion: 'Tallow Ridge', rootstock: 'walnut seedling', method: 'side-veneer', count: 15, graftedDay: 10, grafter: JORY, medium: 'peat', stays: [{ room: 'Callus room', day: 10, hour: 16 }] },
+  {
+    species: 'walnut', scion: 'Tallow Ridge', rootstock: 'walnut seedling', method: 'side-veneer', count: 15, graftedDay: 10, grafter: JORY, medium: 'peat',
+    notes: 'Waited two days in the cellar until the hot-callus box was free.',
+    stays: [{ room: 'Root cellar', day: 10, hour: 16 }, { room: 'Callus room', day: 12, hour: 10 }],
+  },
   {
     species: 'chestnut', scion: 'Marrowfield', rootstock: 'chestnut seedling', method: 'cleft', count: 20, graftedDay: 6, grafter: WREN, medium: 'wood shavings',
     notes: 'Out of the callus room while the heater was serviced; two nights in the garage.',

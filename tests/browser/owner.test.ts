@@ -104,7 +104,7 @@ describe.each(WIDTHS)('an owner at %i px wide', (width) => {
     tolerate({ status: 409, path: `/api/rooms/${roomId}` });
     await page.getByRole('button', { name: 'Delete' }).click();
     await page.getByRole('button', { name: 'Delete room' }).click();
-    await visible(page.getByRole('alert').filter({ hasText: 'has logger history' }));
+    await visible(page.getByRole('alert').filter({ hasText: 'has logger or batch history' }));
     await page.getByRole('button', { name: 'Keep it' }).click();
     await visible(page.getByRole('button', { name: 'Delete' }));
     await goToSection(page, 'Loggers');
@@ -170,6 +170,7 @@ describe.each(WIDTHS)('an owner at %i px wide', (width) => {
     await visible(heading(page, 'Overview'));
     await visible(page.getByRole('button', { name: /Fern Idlewild/ }));
     // Staff edit rooms but do not manage people.
+    await goToSection(page, 'Rooms');
     await visible(page.getByRole('link', { name: 'Add room' }));
     await goToSection(page, 'Settings');
     await visible(page.getByText('Only an owner can change these.'));
