@@ -9,7 +9,7 @@ import type { AuthContext } from '../http/route';
 import { ApiError, notFound } from '../http/errors';
 import { Logger } from '../loggers/logger.model';
 import { Nursery } from '../nurseries/nursery.model';
-import { compareWithStored } from '../readings/readingStore';
+import { compareWithStored, storedSpan } from '../readings/readingStore';
 import { ReadingSpool } from '../readings/readingSpool';
 import { notifyReadingsChanged } from '../readings/readingEvents';
 import { digestWithAppendBase, type AppendBase } from './appendedFile';
@@ -150,6 +150,8 @@ class ImportRun {
   private readConn: PoolConnection | null = null;
   private locked: (() => Promise<void>) | null = null;
   private spool: ReadingSpool | null = null;
+  /** What the logger had stored when this import took its lock. */
+  private storedBefore: { first: number; last: number } | null = null;
   private readonly preview: Reading[] = [];
   private stored = 0;
   private alreadyStored = 0;
@@ -187,7 +189,10 @@ class ImportRun {
         if (this.settings.logger) throw err;
         return null;
       });
-      if (this.logger) this.conn = await this.pool.getConnection();
+      if (this.logger) {
+        this.conn = await this.pool.getConnection();
+        this.storedBefore = await storedSpan(this.conn, this.logger.id);
+      }
       return;
     }
     this.logger = this.append
@@ -201,6 +206,7 @@ class ImportRun {
       startedAt: new Date(), detection,
     });
     this.locked = await lockLogger(this.conn, this.logger.id);
+    this.storedBefore = await storedSpan(this.conn, this.logger.id);
     this.spool = await ReadingSpool.open(this.conn, this.logger.id, this.record.id);
     this.readConn = await this.pool.getConnection();
     // One transaction: an import that fails half-way leaves nothing behind, and its re-run stores everything.
@@ -211,7 +217,7 @@ class ImportRun {
     if (this.append) batch = batch.map((r) => ({ ...r, line: this.physicalLine(r.line) }));
     if (this.preview.length < PREVIEW_ROWS) this.preview.push(...batch.slice(0, PREVIEW_ROWS - this.preview.length));
     if (!this.conn || !this.logger) return;
-    const out = await compareWithStored(this.readConn ?? this.conn, this.logger.id, batch);
+    const out = await compareWithStored(this.readConn ?? this.conn, this.logger.id, batch, this.storedBefore);
     await this.spool?.add(out.fresh);
     this.stored += out.fresh.length;
     this.alreadyStored += out.alreadyStored;

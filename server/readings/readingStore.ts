@@ -4,8 +4,39 @@ import type { LineNote, Reading } from '../../shared/import/types';
 /** Stored to 0.0001 °C (DECIMAL(7,4)); a file value is "the same" as a stored one when equal at that precision. */
 export const storedC = (c: number) => Math.round(c * 10_000) / 10_000;
 
-/** 'YYYY-MM-DD HH:MM:SS.mmm' in UTC: the connector and LOAD DATA take strings at full speed, Date objects row by row. */
-export const sqlInstant = (t: number) => new Date(t).toISOString().slice(0, 23).replace('T', ' ');
+const DAY_MS = 86_400_000;
+let cachedDay = NaN;
+let cachedDayText = '';
+const pad = (n: number, width: number) => String(n).padStart(width, '0');
+
+/**
+ * 'YYYY-MM-DD HH:MM:SS.mmm' in UTC: the connector and LOAD DATA take strings at full speed, Date objects row by row.
+ * Readings come in time order, so the date part is formatted once per day and the time of day by arithmetic; a
+ * million readings otherwise spend a noticeable share of an import in Date.toISOString.
+ */
+export function sqlInstant(t: number): string {
+  const day = Math.floor(t / DAY_MS) * DAY_MS;
+  if (day !== cachedDay) {
+    cachedDay = day;
+    cachedDayText = new Date(day).toISOString().slice(0, 10);
+  }
+  let rest = t - day;
+  const h = Math.floor(rest / 3_600_000);
+  rest -= h * 3_600_000;
+  const m = Math.floor(rest / 60_000);
+  rest -= m * 60_000;
+  const s = Math.floor(rest / 1000);
+  return `${cachedDayText} ${pad(h, 2)}:${pad(m, 2)}:${pad(s, 2)}.${pad(Math.round(rest - s * 1000), 3)}`;
+}
+
+/** The first and last stored instant of a logger, or null when it has none. */
+export async function storedSpan(conn: PoolConnection, loggerId: number): Promise<{ first: number; last: number } | null> {
+  const [row] = (await conn.query(
+    'SELECT CAST(UNIX_TIMESTAMP(MIN(t)) * 1000 AS SIGNED) AS first, CAST(UNIX_TIMESTAMP(MAX(t)) * 1000 AS SIGNED) AS last FROM readings WHERE logger_id = ?',
+    [loggerId],
+  )) as { first: number | null; last: number | null }[];
+  return row.first === null || row.last === null ? null : { first: row.first, last: row.last };
+}
 
 export interface Comparison {
   /** Readings not stored yet for this logger. */
@@ -17,15 +48,22 @@ export interface Comparison {
 /**
  * Compares one batch of a file with what is stored for the logger. A stored reading with another value is a
  * conflict: reported, never overwritten. The caller holds the logger's import lock, so nothing can be stored
- * between this SELECT and the caller's insert.
+ * between this SELECT (or the `stored` span it read under the lock) and the caller's insert.
  */
-export async function compareWithStored(conn: PoolConnection, loggerId: number, batch: Reading[]): Promise<Comparison> {
+export async function compareWithStored(
+  conn: PoolConnection,
+  loggerId: number,
+  batch: Reading[],
+  stored: { first: number; last: number } | null,
+): Promise<Comparison> {
   let lo = Infinity;
   let hi = -Infinity;
   for (const r of batch) {
     if (r.t < lo) lo = r.t;
     if (r.t > hi) hi = r.t;
   }
+  // A batch wholly outside what is stored (a new logger, the new days of a re-export) needs no look-up.
+  if (stored === null || hi < stored.first || lo > stored.last) return { fresh: batch, alreadyStored: 0, conflicts: [] };
   const rows = (await conn.query(
     { sql: 'SELECT CAST(UNIX_TIMESTAMP(t) * 1000 AS SIGNED) AS ms, c FROM readings WHERE logger_id = ? AND t BETWEEN ? AND ?', rowsAsArray: true },
     [loggerId, sqlInstant(lo), sqlInstant(hi)],
