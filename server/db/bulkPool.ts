@@ -7,7 +7,7 @@ import mariadb, { type Pool } from 'mariadb';
  */
 export function createBulkPool(databaseUrl: string): Pool {
   const u = new URL(databaseUrl);
-  return mariadb.createPool({
+  const pool = mariadb.createPool({
     host: u.hostname,
     port: Number(u.port || 3306),
     user: decodeURIComponent(u.username),
@@ -19,4 +19,10 @@ export function createBulkPool(databaseUrl: string): Pool {
     decimalAsNumber: true,
     permitLocalInfile: true,
   });
+  // A connection that breaks while idle (server restart, a protocol error after a bulk load) must be logged and
+  // dropped by the pool, not end the process as an unhandled 'error' event.
+  pool.on('connection', (conn) => {
+    conn.on('error', (err) => console.error(`database connection dropped: ${err.message}`));
+  });
+  return pool;
 }
