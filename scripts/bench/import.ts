@@ -4,18 +4,13 @@ import { createWriteStream } from 'node:fs';
 import { promisify } from 'node:util';
 import mariadb from 'mariadb';
 import { mkdtemp, rm } from 'node:fs/promises';
-import type { AddressInfo } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { once } from 'node:events';
-import { createApp } from '../../server/app';
-import { loadConfig } from '../../server/config';
-import { createMailer } from '../../server/mail/mailer';
 import { Logger } from '../../server/loggers/logger.model';
 import { Nursery } from '../../server/nurseries/nursery.model';
-import { createToken } from '../../server/tokens/tokens.service';
 import { sqlInstant } from '../../server/readings/readingStore';
-import { openBenchDatabase, peakRssMb, printTable, timed } from './benchSupport';
+import { openBenchDatabase, peakRssMb, printTable, startBenchServer, timed } from './benchSupport';
 
 const run = promisify(execFile);
 const ROWS = 1_000_000;
@@ -48,13 +43,9 @@ async function main() {
   const dir = await mkdtemp(join(tmpdir(), 'ck-bench-import-'));
   const nursery = await Nursery.create({ name: 'Bench Nursery', timeZone: 'UTC' });
   const logger = await Logger.create({ nurseryId: nursery.id, label: 'B-1', serial: '', notes: '' });
-  const { token } = await createToken(nursery.id, null, 'bench');
-  const config = loadConfig({ DATABASE_URL: process.env.DATABASE_URL, PORT: '0', JWT_SECRET: 'b'.repeat(40) });
-  const mailer = createMailer('smtp://127.0.0.1:9', config.mailFrom);
-  const { app } = createApp({ config, sequelize: db.sequelize, pool: db.pool, mailer });
-  const server = app.listen(0, '127.0.0.1');
-  await once(server, 'listening');
-  const base = `http://127.0.0.1:${(server.address() as AddressInfo).port}/api/imports`;
+  const server = await startBenchServer(db, nursery.id);
+  const { token } = server;
+  const base = `${server.origin}/api/imports`;
 
   // The upload comes from another process (curl, as a nightly script would send it), so the peak RSS measured here is
   // the server's own, not the client's copy of the file.
@@ -106,7 +97,6 @@ async function main() {
     ['peak RSS of the server process (upload sent by curl)', `${importRss.toFixed(0)} MB`, '< 300 MB'],
   ]);
   server.close();
-  mailer.close();
   await db.close();
   await rm(dir, { recursive: true, force: true });
 }

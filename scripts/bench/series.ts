@@ -1,22 +1,16 @@
 // npm run bench:series — the room chart endpoint on a year of one-minute readings (525,600) for a 1,200 px chart, beside
 // a plain SELECT of the same rows and the two ways of reducing them per request that the stored blocks replace.
-import { once } from 'node:events';
-import type { AddressInfo } from 'node:net';
-import { createApp } from '../../server/app';
-import { loadConfig } from '../../server/config';
 import { Import } from '../../server/imports/import.model';
 import { Logger } from '../../server/loggers/logger.model';
 import { LoggerPlacement } from '../../server/loggers/loggerPlacement.model';
-import { createMailer } from '../../server/mail/mailer';
 import { Nursery } from '../../server/nurseries/nursery.model';
 import { sqlInstant } from '../../server/readings/readingStore';
 import { Room } from '../../server/rooms/room.model';
 import { MAX_GAP_MS } from '../../server/series/roomSeries';
 import { streamRaw } from '../../server/series/rawReadings';
-import { createToken } from '../../server/tokens/tokens.service';
 import { createM4 } from '../../shared/series/m4';
 import type { PackedLine } from '../../shared/series/packedLine';
-import { median, openBenchDatabase, printTable, timed } from './benchSupport';
+import { median, openBenchDatabase, printTable, startBenchServer, timed } from './benchSupport';
 
 const MINUTE = 60_000;
 const ROWS = 525_600;
@@ -61,14 +55,10 @@ async function main() {
   console.log(`Storing ${ROWS.toLocaleString('en')} one-minute readings…`);
   await loadYear(db, nursery.id, logger.id);
 
-  const { token } = await createToken(nursery.id, null, 'bench');
-  const config = loadConfig({ DATABASE_URL: process.env.DATABASE_URL, PORT: '0', JWT_SECRET: 'b'.repeat(40) });
-  const mailer = createMailer('smtp://127.0.0.1:9', config.mailFrom);
-  const { app } = createApp({ config, sequelize: db.sequelize, pool: db.pool, mailer });
-  const server = app.listen(0, '127.0.0.1');
-  await once(server, 'listening');
+  const server = await startBenchServer(db, nursery.id);
+  const { token } = server;
   const query = new URLSearchParams({ from: new Date(START).toISOString(), to: new Date(END).toISOString(), width: String(WIDTH) });
-  const url = `http://127.0.0.1:${(server.address() as AddressInfo).port}/api/rooms/${room.id}/series?${query}`;
+  const url = `${server.origin}/api/rooms/${room.id}/series?${query}`;
   const request = async () => {
     const res = await fetch(url, { headers: { authorization: `Bearer ${token}` } });
     const text = await res.text();
@@ -120,7 +110,6 @@ async function main() {
     ['points', points.toLocaleString('en'), `≤ ${(4 * WIDTH).toLocaleString('en')}`],
   ]);
   server.close();
-  mailer.close();
   await db.close();
 }
 

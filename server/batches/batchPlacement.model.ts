@@ -1,4 +1,5 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { placementColumns } from '../db/placementColumns';
 
 /** Which room a batch sat in, from when to when; `placedTo` null means it is there now. */
 export class BatchPlacement extends Model<InferAttributes<BatchPlacement>, InferCreationAttributes<BatchPlacement>> {
@@ -12,15 +13,7 @@ export class BatchPlacement extends Model<InferAttributes<BatchPlacement>, Infer
 
   static initModel(sequelize: Sequelize) {
     BatchPlacement.init(
-      {
-        id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
-        batchId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
-        roomId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
-        placedFrom: { type: DataTypes.DATE(3), allowNull: false },
-        placedTo: { type: DataTypes.DATE(3), allowNull: true },
-        createdAt: DataTypes.DATE(3),
-        updatedAt: DataTypes.DATE(3),
-      },
+      placementColumns('batchId'),
       { sequelize, tableName: 'batch_placements' },
     );
   }

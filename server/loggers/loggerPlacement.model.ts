@@ -1,4 +1,5 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { placementColumns } from '../db/placementColumns';
 
 /** Which room a logger was in, from when to when; `placedTo` null means it is there now. */
 export class LoggerPlacement extends Model<InferAttributes<LoggerPlacement>, InferCreationAttributes<LoggerPlacement>> {
@@ -12,15 +13,7 @@ export class LoggerPlacement extends Model<InferAttributes<LoggerPlacement>, Inf
 
   static initModel(sequelize: Sequelize) {
     LoggerPlacement.init(
-      {
-        id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
-        loggerId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
-        roomId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
-        placedFrom: { type: DataTypes.DATE(3), allowNull: false },
-        placedTo: { type: DataTypes.DATE(3), allowNull: true },
-        createdAt: DataTypes.DATE(3),
-        updatedAt: DataTypes.DATE(3),
-      },
+      placementColumns('loggerId'),
       { sequelize, tableName: 'logger_placements' },
     );
   }
