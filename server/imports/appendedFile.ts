@@ -1,8 +1,7 @@
-import { createReadStream } from 'node:fs';
 import { open, stat } from 'node:fs/promises';
 import { Op } from 'sequelize';
-import type { ByteSourceFactory } from '../../shared/import/byteSource';
 import { digestFile, type FileDigest } from './fileDigest';
+import type { FileSegments } from './fileSegments';
 import { Import } from './import.model';
 
 /** How many earlier imports are tried as the start of a new file; nightly re-exports match the latest few. */
@@ -18,7 +17,8 @@ export interface AppendBase {
   prefixLines: number;
   /** Preamble and header lines at the top of the file, kept in front of the new part so the reader sees the layout. */
   headLines: number;
-  source: ByteSourceFactory;
+  /** The header lines, then everything after the shared beginning. */
+  file: FileSegments;
 }
 
 export async function digestWithAppendBase(nurseryId: number, path: string): Promise<{ digest: FileDigest; append: AppendBase | null }> {
@@ -43,10 +43,7 @@ export async function digestWithAppendBase(nurseryId: number, path: string): Pro
       base,
       prefixLines: digest.prefixes.get(from)!.lines,
       headLines,
-      source: async function* () {
-        if (headEnd > 0) yield* createReadStream(path, { start: 0, end: headEnd - 1 });
-        yield* createReadStream(path, { start: from, highWaterMark: 1 << 20 });
-      },
+      file: { path, segments: [{ start: 0, end: headEnd }, { start: from }] },
     },
   };
 }

@@ -1,7 +1,5 @@
-import { createReadStream } from 'node:fs';
 import { Op } from 'sequelize';
 import type { Pool, PoolConnection } from 'mariadb';
-import { readLoggerFile } from '../../shared/import/readLoggerFile';
 import { isImportError } from '../../shared/import/importError';
 import type { Detection, LineNote, Reading, ReadOptions, ReadSummary } from '../../shared/import/types';
 import type { ImportSettings } from '../../shared/schemas/imports';
@@ -15,6 +13,8 @@ import { notifyReadingsChanged } from '../readings/readingEvents';
 import { digestWithAppendBase, type AppendBase } from './appendedFile';
 import { Import } from './import.model';
 import { lockLogger } from './importLock';
+import { wholeFile } from './fileSegments';
+import { readInThread } from './readerThread';
 
 export interface IncomingFile {
   path: string;
@@ -44,8 +44,6 @@ export function presentImport(i: Import, loggerLabel: string | null = null) {
     conflictLines: i.conflictLines ?? [],
   };
 }
-
-const fileSource = (path: string) => () => createReadStream(path, { highWaterMark: 1 << 20 });
 
 /** The logger named by the person, else by the file itself (a label or serial in its preamble). */
 async function resolveLogger(nurseryId: number, named: string | undefined, detection: Detection): Promise<Logger> {
@@ -105,7 +103,7 @@ export async function importFile(pool: Pool, auth: AuthContext, file: IncomingFi
 
   const run = new ImportRun(pool, auth, file, settings, digest, append);
   try {
-    const summary = await readLoggerFile(append?.source ?? fileSource(file.path), options, (batch) => run.take(batch), { onDetected: (d) => run.begin(d) })
+    const summary = await readInThread({ file: append?.file ?? wholeFile(file.path), options }, (batch) => run.take(batch), { onDetected: (d) => run.begin(d) })
       .catch((err) => {
         // A re-export whose new part holds only blank lines has nothing to add; that is not an error.
         if (append && isImportError(err) && err.code === 'no_data') return null;

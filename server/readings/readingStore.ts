@@ -82,15 +82,3 @@ export async function compareWithStored(
   }
   return { fresh, alreadyStored, conflicts };
 }
-
-/** One tab-separated line per reading, in the column order of `LOAD_READINGS`; \N is LOAD DATA's NULL. */
-export function readingLines(loggerId: number, importId: number, readings: Reading[]): string {
-  let out = '';
-  for (const r of readings) {
-    const rh = r.rh === null ? '\\N' : (Math.round(r.rh * 100) / 100).toFixed(2);
-    out += `${loggerId}\t${sqlInstant(r.t)}\t${storedC(r.c).toFixed(4)}\t${rh}\t${importId}\n`;
-  }
-  return out;
-}
-
-export const LOAD_READINGS = "LOAD DATA LOCAL INFILE ? INTO TABLE readings CHARACTER SET ascii FIELDS TERMINATED BY '\\t' (logger_id, t, c, rh, import_id)";
