@@ -24,6 +24,9 @@ export class Import extends Model<InferAttributes<Import>, InferCreationAttribut
   declare rowsStored: CreationOptional<number>;
   declare firstAt: CreationOptional<Date | null>;
   declare lastAt: CreationOptional<Date | null>;
+  /** The span of the readings this import stored, null when it stored none (see migration 008). */
+  declare storedFirstAt: CreationOptional<Date | null>;
+  declare storedLastAt: CreationOptional<Date | null>;
   declare detection: CreationOptional<Detection | null>;
   declare rejectedLines: CreationOptional<LineNote[] | null>;
   declare conflictLines: CreationOptional<LineNote[] | null>;
@@ -65,6 +68,8 @@ export class Import extends Model<InferAttributes<Import>, InferCreationAttribut
         rowsStored: count(),
         firstAt: { type: DataTypes.DATE(3), allowNull: true },
         lastAt: { type: DataTypes.DATE(3), allowNull: true },
+        storedFirstAt: { type: DataTypes.DATE(3), allowNull: true },
+        storedLastAt: { type: DataTypes.DATE(3), allowNull: true },
         detection: json('detection'),
         rejectedLines: json('rejectedLines'),
         conflictLines: json('conflictLines'),

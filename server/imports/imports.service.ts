@@ -152,6 +152,8 @@ class ImportRun {
   private storedBefore: { first: number; last: number } | null = null;
   private readonly preview: Reading[] = [];
   private stored = 0;
+  /** First and last instant among the readings this import stores. */
+  private addedSpan: { first: number; last: number } | null = null;
   private alreadyStored = 0;
   private storedConflictCount = 0;
   private readonly storedConflicts: LineNote[] = [];
@@ -218,6 +220,11 @@ class ImportRun {
     const out = await compareWithStored(this.readConn ?? this.conn, this.logger.id, batch, this.storedBefore);
     await this.spool?.add(out.fresh);
     this.stored += out.fresh.length;
+    for (const r of out.fresh) {
+      if (!this.addedSpan) this.addedSpan = { first: r.t, last: r.t };
+      else if (r.t < this.addedSpan.first) this.addedSpan.first = r.t;
+      else if (r.t > this.addedSpan.last) this.addedSpan.last = r.t;
+    }
     this.alreadyStored += out.alreadyStored;
     this.storedConflictCount += out.conflicts.length;
     if (this.storedConflicts.length < MAX_NOTED) this.storedConflicts.push(...out.conflicts.slice(0, MAX_NOTED - this.storedConflicts.length));
@@ -243,6 +250,8 @@ class ImportRun {
       rowsConflicts: rows.conflicts, rowsStored: this.stored,
       firstAt: summary.span.first === null ? null : new Date(summary.span.first),
       lastAt: summary.span.last === null ? null : new Date(summary.span.last),
+      storedFirstAt: this.addedSpan && new Date(this.addedSpan.first),
+      storedLastAt: this.addedSpan && new Date(this.addedSpan.last),
       rejectedLines: summary.rejectedLines, conflictLines,
     });
     if (this.stored > 0 && read && read.span.first !== null) {

@@ -1,6 +1,6 @@
 import type { Pool, PoolConnection } from 'mariadb';
-import { createBlockFolder } from '../../shared/series/blocks';
-import { BLOCK_MINUTES } from '../../shared/series/bucketGrid';
+import { createBlockCascade, type BlockSummary } from '../../shared/series/blocks';
+import { BLOCK_MINUTES, type BlockMinutes } from '../../shared/series/bucketGrid';
 import { replaceBlocks, type BlockSet, type Quantity } from './blockStore';
 import { streamRaw, type HalfOpen } from './rawReadings';
 
@@ -34,8 +34,11 @@ async function markOf(conn: Pool | PoolConnection, loggerId: number): Promise<nu
 
 async function importsAfter(conn: Pool | PoolConnection, loggerId: number, mark: number): Promise<ImportRow[]> {
   return (await conn.query(
+    // What each import stored: its stored span; records without one (demo seed, imports before migration 008) stored
+    // their whole span when they stored anything.
     `SELECT id, status,
-            CAST(UNIX_TIMESTAMP(first_at) * 1000 AS SIGNED) AS firstMs, CAST(UNIX_TIMESTAMP(last_at) * 1000 AS SIGNED) AS lastMs,
+            CAST(UNIX_TIMESTAMP(IF(stored_first_at IS NOT NULL OR rows_stored = 0, stored_first_at, first_at)) * 1000 AS SIGNED) AS firstMs,
+            CAST(UNIX_TIMESTAMP(IF(stored_last_at IS NOT NULL OR rows_stored = 0, stored_last_at, last_at)) * 1000 AS SIGNED) AS lastMs,
             CAST(UNIX_TIMESTAMP(started_at) * 1000 AS SIGNED) AS startedMs
        FROM imports WHERE logger_id = ? AND id > ? ORDER BY id`,
     [loggerId, mark],
@@ -68,18 +71,35 @@ function planWork(imports: readonly ImportRow[], mark: number, now: number): Wor
   return { spans: merged, through };
 }
 
-/** Every block size of both quantities from one pass over the stretch's readings. */
-async function rebuild(conn: PoolConnection, loggerId: number, span: HalfOpen): Promise<void> {
-  const folders = (['c', 'rh'] as Quantity[]).flatMap((quantity) =>
-    BLOCK_MINUTES.map((minutes) => ({ quantity, minutes, folder: createBlockFolder(minutes * MINUTE) })),
-  );
-  const [cFolders, rhFolders] = [folders.filter((f) => f.quantity === 'c'), folders.filter((f) => f.quantity === 'rh')];
-  await streamRaw(conn, loggerId, span, ([t, c, rh]) => {
-    for (const f of cFolders) f.folder.push({ t, v: c });
-    if (rh !== null) for (const f of rhFolders) f.folder.push({ t, v: rh });
+/**
+ * A stretch is rebuilt a fortnight at a time (a whole number of the largest block, so no block straddles two pieces):
+ * what is held stays small however long the stretch. A logger's first import can be a year of 30-second readings.
+ */
+const PIECE_MS = 14 * 24 * 60 * MINUTE;
+
+/** Every block size of both quantities from one pass over the piece's readings. */
+async function rebuildPiece(conn: PoolConnection, loggerId: number, piece: HalfOpen): Promise<void> {
+  const sets: BlockSet[] = [];
+  const cascadeFor = (quantity: Quantity) => {
+    const byMinutes = new Map(BLOCK_MINUTES.map((minutes) => [minutes, [] as BlockSummary[]]));
+    for (const [minutes, blocks] of byMinutes) sets.push({ quantity, minutes, blocks });
+    return createBlockCascade(BLOCK_MINUTES, (minutes, block) => byMinutes.get(minutes as BlockMinutes)!.push(block));
+  };
+  const c = cascadeFor('c');
+  const rh = cascadeFor('rh');
+  await streamRaw(conn, loggerId, piece, ([t, celsius, humidity]) => {
+    c.push({ t, v: celsius });
+    if (humidity !== null) rh.push({ t, v: humidity });
   });
-  const sets: BlockSet[] = folders.map((f) => ({ quantity: f.quantity, minutes: f.minutes, blocks: f.folder.finish() }));
-  await replaceBlocks(conn, loggerId, span, sets);
+  c.finish();
+  rh.finish();
+  await replaceBlocks(conn, loggerId, piece, sets);
+}
+
+async function rebuild(conn: PoolConnection, loggerId: number, span: HalfOpen): Promise<void> {
+  for (let from = span.from; from < span.to; from += PIECE_MS) {
+    await rebuildPiece(conn, loggerId, { from, to: Math.min(span.to, from + PIECE_MS) });
+  }
 }
 
 /** Rebuilds the stretches and moves the mark in one transaction, so readers see old blocks or new ones, never half. */

@@ -6,24 +6,53 @@ export interface BlockSummary extends Summary {
   start: number;
 }
 
-/** Folds time-ordered readings into one summary per block that holds any; empty blocks are simply absent. */
-export function createBlockFolder(blockMs: number) {
-  const done: BlockSummary[] = [];
+/**
+ * Folds time-ordered runs (a reading's own summary, or the summaries of smaller blocks that divide this size) into one
+ * summary per block that holds any, handing each block to `emit` once it is complete; empty blocks are simply absent.
+ */
+export function createBlockFolder(blockMs: number, emit: (block: BlockSummary) => void) {
   let open: BlockSummary | null = null;
   return {
-    push(point: TimedValue): void {
-      const start = Math.floor(point.t / blockMs) * blockMs;
+    push(run: Summary): void {
+      const start = Math.floor(run.first.t / blockMs) * blockMs;
       if (open && open.start === start) {
-        mergeLater(open, summaryOf(point));
+        mergeLater(open, run);
         return;
       }
-      if (open) done.push(open);
-      open = { start, ...summaryOf(point) };
+      if (open) emit(open);
+      open = { start, first: run.first, min: run.min, max: run.max, last: run.last };
     },
-    finish(): BlockSummary[] {
-      if (open) done.push(open);
+    finish(): void {
+      if (open) emit(open);
       open = null;
-      return done;
+    },
+  };
+}
+
+/**
+ * Every block size at once from one pass over time-ordered readings: readings fold into the smallest size and each
+ * completed block into the next size up (each size divides the next), so a reading is handled once, not once per
+ * size. Merging keeps the earlier extreme on ties, so the blocks are those each size would get from the readings.
+ */
+export function createBlockCascade(minutes: readonly number[], emit: (minutes: number, block: BlockSummary) => void) {
+  const folders: ReturnType<typeof createBlockFolder>[] = [];
+  for (let i = minutes.length - 1; i >= 0; i--) {
+    const larger = folders[0];
+    const size = minutes[i];
+    folders.unshift(
+      createBlockFolder(size * 60_000, (block) => {
+        emit(size, block);
+        larger?.push(block);
+      }),
+    );
+  }
+  return {
+    push(point: TimedValue): void {
+      folders[0].push(summaryOf(point));
+    },
+    /** Closes the open blocks, smallest first so each reaches the size above before that one closes. */
+    finish(): void {
+      for (const folder of folders) folder.finish();
     },
   };
 }

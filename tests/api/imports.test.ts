@@ -93,6 +93,12 @@ describe('importing logger files through the API', () => {
     // Line 54 of both files is the ERR row; the new bad row is line 3 + 121 = 124 of tonight's file.
     expect(second.body.rejectedLines.map((n: { line: number }) => n.line)).toEqual([54, 124]);
     expect(second.body.span.first).toBe(new Date(Date.UTC(2026, 3, 1)).toISOString());
+    // What it stored is the new part alone; chart blocks are rebuilt over that, not over the file's whole span.
+    const [record] = (await t.pool.query(
+      'SELECT CAST(UNIX_TIMESTAMP(stored_first_at) * 1000 AS SIGNED) AS first, CAST(UNIX_TIMESTAMP(stored_last_at) * 1000 AS SIGNED) AS last FROM imports WHERE id = ?',
+      [second.body.import.id],
+    )) as { first: number; last: number }[];
+    expect(record).toEqual({ first: Date.UTC(2026, 3, 1) + 100 * 600_000, last: Date.UTC(2026, 3, 1) + 129 * 600_000 });
   });
 
   it('two imports of the same file at the same moment store each reading once', async () => {

@@ -6,6 +6,7 @@ import * as batchesProfiles from './004-batches-profiles';
 import * as alerts from './005-alerts';
 import * as season from './006-season';
 import * as readingBlocks from './007-reading-blocks';
+import * as importStoredSpan from './008-import-stored-span';
 
 export interface Migration {
   name: string;
@@ -22,4 +23,5 @@ export const migrations: Migration[] = [
   { name: '005-alerts', ...alerts },
   { name: '006-season', ...season },
   { name: '007-reading-blocks', ...readingBlocks },
+  { name: '008-import-stored-span', ...importStoredSpan },
 ];

@@ -2,18 +2,21 @@
 // builds from every reading on the same grid.
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { createBlockFolder } from '../../../shared/series/blocks';
+import { createBlockCascade, createBlockFolder, type BlockSummary } from '../../../shared/series/blocks';
 import { planBucketGrid } from '../../../shared/series/bucketGrid';
 import { createM4, m4 } from '../../../shared/series/m4';
-import type { TimedValue } from '../../../shared/series/summary';
+import { summaryOf, type TimedValue } from '../../../shared/series/summary';
+import { BLOCK_MINUTES } from '../../../shared/series/bucketGrid';
 
 const MINUTE = 60_000;
 const T0 = Date.UTC(2026, 10, 2);
 
 function fold(readings: TimedValue[], blockMs: number) {
-  const folder = createBlockFolder(blockMs);
-  for (const r of readings) folder.push(r);
-  return folder.finish();
+  const blocks: BlockSummary[] = [];
+  const folder = createBlockFolder(blockMs, (block) => blocks.push(block));
+  for (const r of readings) folder.push(summaryOf(r));
+  folder.finish();
+  return blocks;
 }
 
 describe('block summaries', () => {
@@ -44,6 +47,26 @@ describe('block summaries', () => {
         expect(fromBlocks.finish()).toEqual(m4(rs, grid, maxGap));
       }),
       { numRuns: 200 },
+    );
+  });
+
+  it('folded size by size from the smallest, are the blocks each size gets from the readings (ties included)', () => {
+    // Values on a coarse grid, so equal lowest and highest readings within a block are common.
+    const readings = fc
+      .array(fc.record({ step: fc.integer({ min: 1, max: 400 }), v: fc.integer({ min: -3, max: 3 }) }), { minLength: 1, maxLength: 800 })
+      .map((steps) => {
+        let t = T0 + 1234;
+        return steps.map(({ step, v }) => ({ t: (t += step * 20_000), v }));
+      });
+    fc.assert(
+      fc.property(readings, (rs) => {
+        const cascaded = new Map<number, BlockSummary[]>(BLOCK_MINUTES.map((m) => [m, []]));
+        const cascade = createBlockCascade(BLOCK_MINUTES, (minutes, block) => cascaded.get(minutes)!.push(block));
+        for (const r of rs) cascade.push(r);
+        cascade.finish();
+        for (const minutes of BLOCK_MINUTES) expect(cascaded.get(minutes)).toEqual(fold(rs, minutes * MINUTE));
+      }),
+      { numRuns: 300 },
     );
   });
 });
