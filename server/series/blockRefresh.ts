@@ -2,7 +2,8 @@ import type { Pool, PoolConnection } from 'mariadb';
 import { createBlockCascade, type BlockSummary } from '../../shared/series/blocks';
 import { BLOCK_MINUTES, type BlockMinutes } from '../../shared/series/bucketGrid';
 import { replaceBlocks, type BlockSet, type Quantity } from './blockStore';
-import { streamRaw, type HalfOpen } from './rawReadings';
+import type { HalfOpen } from './rawReadings';
+import { readSmallestBlocks } from './smallestBlocks';
 
 const MINUTE = 60_000;
 /** Rebuilds cover whole blocks of the largest size, which every smaller size divides. */
@@ -73,26 +74,20 @@ function planWork(imports: readonly ImportRow[], mark: number, now: number): Wor
 
 /**
  * A stretch is rebuilt a fortnight at a time (a whole number of the largest block, so no block straddles two pieces):
- * what is held stays small however long the stretch. A logger's first import can be a year of 30-second readings.
+ * what is held stays small however long the stretch, and each piece is one short query and one insert.
  */
 const PIECE_MS = 14 * 24 * 60 * MINUTE;
 
-/** Every block size of both quantities from one pass over the piece's readings. */
+/** Every block size of both quantities: the smallest from the database, each larger one folded from the size below. */
 async function rebuildPiece(conn: PoolConnection, loggerId: number, piece: HalfOpen): Promise<void> {
-  const sets: BlockSet[] = [];
-  const cascadeFor = (quantity: Quantity) => {
+  const smallest = await readSmallestBlocks(conn, loggerId, piece);
+  const sets: BlockSet[] = (['c', 'rh'] as Quantity[]).flatMap((quantity) => {
     const byMinutes = new Map(BLOCK_MINUTES.map((minutes) => [minutes, [] as BlockSummary[]]));
-    for (const [minutes, blocks] of byMinutes) sets.push({ quantity, minutes, blocks });
-    return createBlockCascade(BLOCK_MINUTES, (minutes, block) => byMinutes.get(minutes as BlockMinutes)!.push(block));
-  };
-  const c = cascadeFor('c');
-  const rh = cascadeFor('rh');
-  await streamRaw(conn, loggerId, piece, ([t, celsius, humidity]) => {
-    c.push({ t, v: celsius });
-    if (humidity !== null) rh.push({ t, v: humidity });
+    const cascade = createBlockCascade(BLOCK_MINUTES, (minutes, block) => byMinutes.get(minutes as BlockMinutes)!.push(block));
+    for (const block of smallest[quantity]) cascade.push(block);
+    cascade.finish();
+    return [...byMinutes].map(([minutes, blocks]) => ({ quantity, minutes, blocks }));
   });
-  c.finish();
-  rh.finish();
   await replaceBlocks(conn, loggerId, piece, sets);
 }
 

@@ -1,5 +1,5 @@
 // Block summaries: readings cut on a fixed grid of blockMs (aligned to the epoch) and summarised per block.
-import { mergeLater, summaryOf, type Summary, type TimedValue } from './summary';
+import { mergeLater, type Summary } from './summary';
 
 export interface BlockSummary extends Summary {
   /** Epoch ms where the block begins; it covers [start, start + blockMs). */
@@ -30,9 +30,10 @@ export function createBlockFolder(blockMs: number, emit: (block: BlockSummary) =
 }
 
 /**
- * Every block size at once from one pass over time-ordered readings: readings fold into the smallest size and each
- * completed block into the next size up (each size divides the next), so a reading is handled once, not once per
- * size. Merging keeps the earlier extreme on ties, so the blocks are those each size would get from the readings.
+ * Every block size at once from one pass over time-ordered runs (readings' own summaries, or blocks of the smallest
+ * size): runs fold into the smallest size and each completed block into the next size up (each size divides the
+ * next), so a run is handled once, not once per size. Merging keeps the earlier extreme on ties, so the blocks are
+ * those each size would get from the readings.
  */
 export function createBlockCascade(minutes: readonly number[], emit: (minutes: number, block: BlockSummary) => void) {
   const folders: ReturnType<typeof createBlockFolder>[] = [];
@@ -47,8 +48,8 @@ export function createBlockCascade(minutes: readonly number[], emit: (minutes: n
     );
   }
   return {
-    push(point: TimedValue): void {
-      folders[0].push(summaryOf(point));
+    push(run: Summary): void {
+      folders[0].push(run);
     },
     /** Closes the open blocks, smallest first so each reaches the size above before that one closes. */
     finish(): void {

@@ -62,7 +62,7 @@ describe('block summaries', () => {
       fc.property(readings, (rs) => {
         const cascaded = new Map<number, BlockSummary[]>(BLOCK_MINUTES.map((m) => [m, []]));
         const cascade = createBlockCascade(BLOCK_MINUTES, (minutes, block) => cascaded.get(minutes)!.push(block));
-        for (const r of rs) cascade.push(r);
+        for (const r of rs) cascade.push(summaryOf(r));
         cascade.finish();
         for (const minutes of BLOCK_MINUTES) expect(cascaded.get(minutes)).toEqual(fold(rs, minutes * MINUTE));
       }),
