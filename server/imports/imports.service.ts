@@ -14,6 +14,7 @@ import { digestWithAppendBase, type AppendBase } from './appendedFile';
 import { Import } from './import.model';
 import { lockLogger } from './importLock';
 import { wholeFile } from './fileSegments';
+import { LINE, STRIDE, T, countOf, unpackReadings, type PackedReadings } from './packedReadings';
 import { readInThread } from './readerThread';
 
 export interface IncomingFile {
@@ -213,17 +214,18 @@ class ImportRun {
     await this.conn.beginTransaction();
   }
 
-  async take(batch: Reading[]): Promise<void> {
-    if (this.append) batch = batch.map((r) => ({ ...r, line: this.physicalLine(r.line) }));
-    if (this.preview.length < PREVIEW_ROWS) this.preview.push(...batch.slice(0, PREVIEW_ROWS - this.preview.length));
+  async take(batch: PackedReadings): Promise<void> {
+    if (this.append) for (let at = LINE; at < batch.length; at += STRIDE) batch[at] = this.physicalLine(batch[at]);
+    if (this.preview.length < PREVIEW_ROWS) this.preview.push(...unpackReadings(batch.subarray(0, (PREVIEW_ROWS - this.preview.length) * STRIDE)));
     if (!this.conn || !this.logger) return;
     const out = await compareWithStored(this.readConn ?? this.conn, this.logger.id, batch, this.storedBefore);
     await this.spool?.add(out.fresh);
-    this.stored += out.fresh.length;
-    for (const r of out.fresh) {
-      if (!this.addedSpan) this.addedSpan = { first: r.t, last: r.t };
-      else if (r.t < this.addedSpan.first) this.addedSpan.first = r.t;
-      else if (r.t > this.addedSpan.last) this.addedSpan.last = r.t;
+    this.stored += countOf(out.fresh);
+    for (let at = T; at < out.fresh.length; at += STRIDE) {
+      const t = out.fresh[at];
+      if (!this.addedSpan) this.addedSpan = { first: t, last: t };
+      else if (t < this.addedSpan.first) this.addedSpan.first = t;
+      else if (t > this.addedSpan.last) this.addedSpan.last = t;
     }
     this.alreadyStored += out.alreadyStored;
     this.storedConflictCount += out.conflicts.length;

@@ -1,7 +1,5 @@
-// The reader thread: reads logger files with the shared reader, one job at a time, and sends each file's readings to
-// the import batch by batch. It stays up between jobs, so a nightly run of small files does not pay for a new thread
-// (and the TypeScript loader in it) each time.
-import { parentPort } from 'node:worker_threads';
+// The reader thread: reads one logger file with the shared reader and sends its readings to the import batch by batch.
+import { parentPort, workerData } from 'node:worker_threads';
 import { isImportError } from '../../shared/import/importError';
 import { readLoggerFile } from '../../shared/import/readLoggerFile';
 import { segmentsSource } from './fileSegments';
@@ -19,7 +17,6 @@ let wake: (() => void) | null = null;
 const ready = () => (credit > 0 ? Promise.resolve() : new Promise<void>((resolve) => (wake = resolve)));
 
 async function read(job: ReaderJob): Promise<void> {
-  credit = 0;
   try {
     const summary = await readLoggerFile(
       segmentsSource(job.file),
@@ -45,11 +42,9 @@ async function read(job: ReaderJob): Promise<void> {
 }
 
 port.on('message', (message: ToReader) => {
-  if (message.kind === 'read') {
-    void read(message.job);
-    return;
-  }
   credit += message.kind === 'proceed' ? AHEAD : 1;
   wake?.();
   wake = null;
 });
+
+void read(workerData as ReaderJob);

@@ -1,6 +1,8 @@
-// Entry of the reader thread: a new thread does not inherit the TypeScript loader, so it registers tsx itself
-// (as cli/bin.mjs does) before loading the reader.
-import { register } from 'tsx/esm/api';
+// Entry of the reader thread. A new thread does not inherit the TypeScript loader, so it registers tsx itself, in its
+// CommonJS form: that loads in-thread, where the ESM form starts a loader thread of its own (slower to start, measured
+// at about 450 ms against 300 ms, and one more heap).
+import { createRequire } from 'node:module';
+import { register } from 'tsx/cjs/api';
 
 register();
-await import('./readerThreadMain.ts');
+createRequire(import.meta.url)('./readerThreadMain.ts');

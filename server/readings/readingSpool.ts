@@ -5,7 +5,7 @@ import { join } from 'node:path';
 import { once } from 'node:events';
 import { createInterface } from 'node:readline';
 import type { PoolConnection } from 'mariadb';
-import type { Reading } from '../../shared/import/types';
+import { countOf, type PackedReadings } from '../imports/packedReadings';
 import { LOAD_READINGS, loadDataRows } from './loadDataText';
 
 /** ER_NOT_ALLOWED_COMMAND and ER_LOAD_INFILE_CAPABILITY_DISABLED: the server or connection does not take LOCAL INFILE. */
@@ -47,9 +47,9 @@ export class ReadingSpool {
     return new ReadingSpool(await mkdtemp(join(tmpdir(), 'coldknit-import-')), conn, loggerId, importId);
   }
 
-  async add(readings: Reading[]): Promise<void> {
+  async add(readings: PackedReadings): Promise<void> {
     if (this.failure) throw this.failure;
-    if (readings.length === 0) return;
+    if (countOf(readings) === 0) return;
     const rows = loadDataRows(readings);
     if (this.chunkBytes + rows.length > CHUNK_BYTES) await this.sendChunk();
     this.out ??= createWriteStream(this.chunkPath());

@@ -1,5 +1,6 @@
 import type { PoolConnection } from 'mariadb';
-import type { LineNote, Reading } from '../../shared/import/types';
+import type { LineNote } from '../../shared/import/types';
+import { C, LINE, STRIDE, T, countOf, pickReadings, type PackedReadings } from '../imports/packedReadings';
 
 /** Stored to 0.0001 °C (DECIMAL(7,4)); a file value is "the same" as a stored one when equal at that precision. */
 export const storedC = (c: number) => Math.round(c * 10_000) / 10_000;
@@ -40,7 +41,7 @@ export async function storedSpan(conn: PoolConnection, loggerId: number): Promis
 
 export interface Comparison {
   /** Readings not stored yet for this logger. */
-  fresh: Reading[];
+  fresh: PackedReadings;
   alreadyStored: number;
   conflicts: LineNote[];
 }
@@ -53,14 +54,14 @@ export interface Comparison {
 export async function compareWithStored(
   conn: PoolConnection,
   loggerId: number,
-  batch: Reading[],
+  batch: PackedReadings,
   stored: { first: number; last: number } | null,
 ): Promise<Comparison> {
   let lo = Infinity;
   let hi = -Infinity;
-  for (const r of batch) {
-    if (r.t < lo) lo = r.t;
-    if (r.t > hi) hi = r.t;
+  for (let r = 0; r < batch.length; r += STRIDE) {
+    if (batch[r + T] < lo) lo = batch[r + T];
+    if (batch[r + T] > hi) hi = batch[r + T];
   }
   // A batch wholly outside what is stored (a new logger, the new days of a re-export) needs no look-up.
   if (stored === null || hi < stored.first || lo > stored.last) return { fresh: batch, alreadyStored: 0, conflicts: [] };
@@ -70,15 +71,16 @@ export async function compareWithStored(
   )) as [number, number][];
   if (rows.length === 0) return { fresh: batch, alreadyStored: 0, conflicts: [] };
   const existing = new Map<number, number>(rows);
-  const fresh: Reading[] = [];
+  const fresh: number[] = [];
   const conflicts: LineNote[] = [];
   let alreadyStored = 0;
-  for (const r of batch) {
-    const stored = existing.get(r.t);
-    const c = storedC(r.c);
-    if (stored === undefined) fresh.push(r);
-    else if (stored === c) alreadyStored++;
-    else conflicts.push({ line: r.line, reason: `already stored with ${stored} °C at this time; the file says ${c} °C (kept the stored value)` });
+  for (let i = 0; i < countOf(batch); i++) {
+    const at = i * STRIDE;
+    const kept = existing.get(batch[at + T]);
+    const c = storedC(batch[at + C]);
+    if (kept === undefined) fresh.push(i);
+    else if (kept === c) alreadyStored++;
+    else conflicts.push({ line: batch[at + LINE], reason: `already stored with ${kept} °C at this time; the file says ${c} °C (kept the stored value)` });
   }
-  return { fresh, alreadyStored, conflicts };
+  return { fresh: pickReadings(batch, fresh), alreadyStored, conflicts };
 }

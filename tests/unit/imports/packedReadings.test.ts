@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { packReadings, unpackReadings } from '../../../server/imports/packedReadings';
+import { countOf, packReadings, pickReadings, unpackReadings } from '../../../server/imports/packedReadings';
 
 describe('packed readings (the reader thread’s batches)', () => {
   it('unpack(pack(x)) gives x back, humidity absent or present', () => {
@@ -15,5 +15,11 @@ describe('packed readings (the reader thread’s batches)', () => {
         expect(unpackReadings(packReadings(readings))).toEqual(readings);
       }),
     );
+  });
+
+  it('picks readings by index, in the order asked', () => {
+    const readings = [1, 2, 3, 4].map((k) => ({ t: k * 1000, c: k / 10, rh: k % 2 ? null : k, line: k + 1 }));
+    expect(unpackReadings(pickReadings(packReadings(readings), [3, 0]))).toEqual([readings[3], readings[0]]);
+    expect(countOf(pickReadings(packReadings(readings), []))).toBe(0);
   });
 });

@@ -6,6 +6,7 @@ import { ImportError } from '../../../shared/import/importError';
 import { readLoggerFile } from '../../../shared/import/readLoggerFile';
 import type { Reading, ReadOptions } from '../../../shared/import/types';
 import { segmentsSource, wholeFile, type FileSegments } from '../../../server/imports/fileSegments';
+import { unpackReadings } from '../../../server/imports/packedReadings';
 import { readInThread } from '../../../server/imports/readerThread';
 
 const samples = join(import.meta.dirname, '..', '..', '..', 'samples');
@@ -14,7 +15,7 @@ const options: ReadOptions = { defaultZone: 'America/New_York' };
 async function inThread(file: FileSegments, opts: ReadOptions = options) {
   const readings: Reading[] = [];
   const summary = await readInThread({ file, options: opts }, async (batch) => {
-    readings.push(...batch);
+    readings.push(...unpackReadings(batch));
   });
   return { summary, readings };
 }

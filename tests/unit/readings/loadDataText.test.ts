@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import type { Reading } from '../../../shared/import/types';
+import { packReadings } from '../../../server/imports/packedReadings';
 import { loadDataRows } from '../../../server/readings/loadDataText';
 
 // The references are ECMAScript's own formatters: Date.prototype.toISOString (ISO 8601, UTC) for the instant and
@@ -27,7 +28,7 @@ describe('loadDataRows', () => {
   it('writes the same bytes as toISOString and toFixed at the columns’ precision', () => {
     fc.assert(
       fc.property(fc.array(reading, { maxLength: 50 }), (readings) => {
-        expect(loadDataRows(readings).toString('ascii')).toBe(reference(readings));
+        expect(loadDataRows(packReadings(readings)).toString('ascii')).toBe(reference(readings));
       }),
       { numRuns: 2000 },
     );
@@ -42,7 +43,7 @@ describe('loadDataRows', () => {
       { t: midnight + 86_399_999, c: -0.00005, rh: 99.995, line: 4 },
       { t: midnight + 86_400_000, c: 3.14159, rh: 45.5, line: 5 },
     ];
-    expect(loadDataRows(readings).toString('ascii')).toBe(reference(readings));
-    expect(loadDataRows([]).length).toBe(0);
+    expect(loadDataRows(packReadings(readings)).toString('ascii')).toBe(reference(readings));
+    expect(loadDataRows(packReadings([])).length).toBe(0);
   });
 });
