@@ -113,7 +113,7 @@ async function bench() {
   const [name] = extraArgs;
   const child = startChild(bin('tsx'), [join('scripts', 'bench', `${name}.ts`)], {
     cwd: root,
-    env: { ...process.env, DATABASE_URL: url, NODE_OPTIONS: '--max-old-space-size=4096' },
+    env: { ...process.env, DATABASE_URL: url },
   });
   await shutdown(await child.exited);
 }

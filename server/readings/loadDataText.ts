@@ -43,7 +43,8 @@ export function loadDataRows(readings: PackedReadings): Buffer {
 let cachedDay = Number.NaN;
 const cachedDate = Buffer.alloc(10);
 
-function writeInstant(out: Buffer, at: number, t: number): number {
+/** 'YYYY-MM-DD HH:MM:SS.mmm' (UTC) into `out` at `at`; answers where the next byte goes. */
+export function writeInstant(out: Buffer, at: number, t: number): number {
   const day = Math.floor(t / DAY_MS) * DAY_MS;
   if (day !== cachedDay) {
     cachedDay = day;
