@@ -15,7 +15,7 @@ import { Import } from './import.model';
 import { lockLogger } from './importLock';
 import { wholeFile } from './fileSegments';
 import { LINE, STRIDE, T, countOf, unpackReadings, type PackedReadings } from './packedReadings';
-import { readInThread } from './readerThread';
+import { startReader, type Reader } from './readerThread';
 
 export interface IncomingFile {
   path: string;
@@ -89,6 +89,16 @@ const iso = (t: number | null) => (t === null ? null : new Date(t).toISOString()
  * is written first and marked failed if anything goes wrong, so a re-run completes it with nothing twice.
  */
 export async function importFile(pool: Pool, auth: AuthContext, file: IncomingFile, settings: ImportSettings): Promise<ImportOutcome> {
+  // The reader thread starts while the file is hashed and looked up; an identical file stops it unused.
+  const reader = startReader();
+  try {
+    return await importWith(reader, pool, auth, file, settings);
+  } finally {
+    reader.stop();
+  }
+}
+
+async function importWith(reader: Reader, pool: Pool, auth: AuthContext, file: IncomingFile, settings: ImportSettings): Promise<ImportOutcome> {
   const nursery = await Nursery.findByPk(auth.nurseryId);
   const { digest, append: appendBase } = await digestWithAppendBase(auth.nurseryId, file.path);
   if (digest.bytes === 0) throw new ApiError(422, 'empty', 'The file is empty. Pick the file the logger exported, with its readings.');
@@ -104,7 +114,7 @@ export async function importFile(pool: Pool, auth: AuthContext, file: IncomingFi
 
   const run = new ImportRun(pool, auth, file, settings, digest, append);
   try {
-    const summary = await readInThread({ file: append?.file ?? wholeFile(file.path), options }, (batch) => run.take(batch), { onDetected: (d) => run.begin(d) })
+    const summary = await reader.read({ file: append?.file ?? wholeFile(file.path), options }, (batch) => run.take(batch), { onDetected: (d) => run.begin(d) })
       .catch((err) => {
         // A re-export whose new part holds only blank lines has nothing to add; that is not an error.
         if (append && isImportError(err) && err.code === 'no_data') return null;

@@ -2,7 +2,7 @@ import type { ImportErrorCode } from '../../shared/import/importError';
 import type { Detection, ReadOptions, ReadSummary } from '../../shared/import/types';
 import type { FileSegments } from './fileSegments';
 
-/** One file to read, with the reader's options: the thread's workerData. */
+/** One file to read, with the reader's options. */
 export interface ReaderJob {
   file: FileSegments;
   options: ReadOptions;
@@ -15,5 +15,5 @@ export type FromReader =
   | { kind: 'done'; summary: ReadSummary }
   | { kind: 'failed'; error: { code: ImportErrorCode | null; message: string; stack?: string } };
 
-/** Import → reader thread: carry on after the layout was accepted, or after a batch was taken. */
-export type ToReader = { kind: 'proceed' } | { kind: 'taken' };
+/** Import → reader thread: read a file; carry on after its layout was accepted, or after a batch was taken. */
+export type ToReader = { kind: 'read'; job: ReaderJob } | { kind: 'proceed' } | { kind: 'taken' };

@@ -1,5 +1,5 @@
 // The reader thread: reads one logger file with the shared reader and sends its readings to the import batch by batch.
-import { parentPort, workerData } from 'node:worker_threads';
+import { parentPort } from 'node:worker_threads';
 import { isImportError } from '../../shared/import/importError';
 import { readLoggerFile } from '../../shared/import/readLoggerFile';
 import { segmentsSource } from './fileSegments';
@@ -42,9 +42,11 @@ async function read(job: ReaderJob): Promise<void> {
 }
 
 port.on('message', (message: ToReader) => {
+  if (message.kind === 'read') {
+    void read(message.job);
+    return;
+  }
   credit += message.kind === 'proceed' ? AHEAD : 1;
   wake?.();
   wake = null;
 });
-
-void read(workerData as ReaderJob);

@@ -7,14 +7,14 @@ import { readLoggerFile } from '../../../shared/import/readLoggerFile';
 import type { Reading, ReadOptions } from '../../../shared/import/types';
 import { segmentsSource, wholeFile, type FileSegments } from '../../../server/imports/fileSegments';
 import { unpackReadings } from '../../../server/imports/packedReadings';
-import { readInThread } from '../../../server/imports/readerThread';
+import { startReader } from '../../../server/imports/readerThread';
 
 const samples = join(import.meta.dirname, '..', '..', '..', 'samples');
 const options: ReadOptions = { defaultZone: 'America/New_York' };
 
 async function inThread(file: FileSegments, opts: ReadOptions = options) {
   const readings: Reading[] = [];
-  const summary = await readInThread({ file, options: opts }, async (batch) => {
+  const summary = await startReader().read({ file, options: opts }, async (batch) => {
     readings.push(...unpackReadings(batch));
   });
   return { summary, readings };
@@ -65,7 +65,7 @@ describe('reading a logger file on the reader thread', () => {
     const file = wholeFile(join(samples, 'root-cellar-k01-iso.csv'));
     const refused = new Error('no such logger');
     let batches = 0;
-    const outcome = readInThread({ file, options }, async () => {
+    const outcome = startReader().read({ file, options }, async () => {
       batches++;
     }, {
       onDetected: async () => {
@@ -75,6 +75,13 @@ describe('reading a logger file on the reader thread', () => {
     await expect(outcome).rejects.toBe(refused);
     expect(batches).toBe(0);
     expect((await inThread(file)).summary.rows.accepted).toBeGreaterThan(0);
+  });
+
+  it('a reader stopped before it is given a file ends quietly', async () => {
+    const reader = startReader();
+    reader.stop();
+    reader.stop();
+    await expect(reader.read({ file: wholeFile(join(samples, 'root-cellar-k01-iso.csv')), options }, async () => {})).rejects.toThrow(/stopped/);
   });
 
   it('reads two files at once on two threads', async () => {
