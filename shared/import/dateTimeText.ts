@@ -1,4 +1,5 @@
 import {
+  basicToExtended,
   DATE_ONLY_YEAR_FIRST,
   DATE_ONLY_YEAR_LAST,
   DATETIME_YEAR_FIRST,
@@ -34,7 +35,7 @@ export function leadingDateParts(text: string): [number, number] | null {
 export function readDateTime(text: string, style: DateStyle, order: DateOrder): WrittenTimeOutcome {
   const quick = readDateTimeQuickly(text, style, order);
   if (quick !== null) return quick;
-  const match = (style === 'year-first' ? DATETIME_YEAR_FIRST : DATETIME_YEAR_LAST).exec(text);
+  const match = style === 'year-first' ? DATETIME_YEAR_FIRST.exec(basicToExtended(text) ?? text) : DATETIME_YEAR_LAST.exec(text);
   if (!match) return notATime(text);
   const date = calendarDate(match, style, order);
   if (typeof date === 'string') return date;

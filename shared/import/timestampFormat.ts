@@ -1,4 +1,5 @@
 import {
+  basicToExtended,
   DATE_ONLY_YEAR_FIRST,
   DATE_ONLY_YEAR_LAST,
   DATETIME_YEAR_FIRST,
@@ -32,6 +33,11 @@ export function describeFormat(sample: string, shape: CellShape, order: DateOrde
     const match = TIME_ONLY.exec(sample);
     return match ? timePart(match, 1) : '';
   }
+  const extended = basicToExtended(sample);
+  if (extended !== null) {
+    // Basic format: the same parts as the extended spelling, without its separators.
+    return describeFormat(extended, shape, order).replace(/[-:]/g, '');
+  }
   const isDateTime = shape.startsWith('datetime');
   const yearFirst = shape.endsWith('year-first');
   const regex = isDateTime
@@ -53,7 +59,7 @@ export function hasMeridiem(text: string): boolean {
 
 /** True when the text carries an explicit UTC offset or Z. */
 export function hasWrittenOffset(text: string): boolean {
-  const match = DATETIME_YEAR_FIRST.exec(text) ?? DATETIME_YEAR_LAST.exec(text);
+  const match = DATETIME_YEAR_FIRST.exec(basicToExtended(text) ?? text) ?? DATETIME_YEAR_LAST.exec(text);
   if (match) return match[10] !== undefined;
   const time = TIME_ONLY.exec(text);
   return time ? time[6] !== undefined : false;

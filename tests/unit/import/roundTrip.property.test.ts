@@ -7,7 +7,7 @@ import { readBytes } from './readText';
  * second or millisecond written, temperatures to the written precision, line numbers physical.
  */
 
-type DateShape = 'iso-offset' | 'iso-z-ms' | 'ymd-space' | 'dmy-dot' | 'mdy-12h' | 'date+time' | 'epoch-s' | 'epoch-ms';
+type DateShape = 'iso-offset' | 'iso-basic' | 'iso-z-ms' | 'ymd-space' | 'dmy-dot' | 'mdy-12h' | 'date+time' | 'epoch-s' | 'epoch-ms';
 type Encoding = 'utf-8' | 'utf-8-bom' | 'windows-1252' | 'utf-16le';
 
 interface Shape {
@@ -30,7 +30,7 @@ const PREAMBLE_LINES = ['# Coldknit test rig', 'Logger: K-01', 'Room: Callus roo
 const shapeArb: fc.Arbitrary<Shape> = fc.record({
   delimiter: fc.constantFrom(',' as const, ';' as const, '\t' as const),
   decimalComma: fc.boolean(),
-  dateShape: fc.constantFrom<DateShape>('iso-offset', 'iso-z-ms', 'ymd-space', 'dmy-dot', 'mdy-12h', 'date+time', 'epoch-s', 'epoch-ms'),
+  dateShape: fc.constantFrom<DateShape>('iso-offset', 'iso-basic', 'iso-z-ms', 'ymd-space', 'dmy-dot', 'mdy-12h', 'date+time', 'epoch-s', 'epoch-ms'),
   unit: fc.constantFrom('C' as const, 'F' as const),
   header: fc.boolean(),
   humidity: fc.boolean(),
@@ -94,6 +94,8 @@ function timeCells(t: number, shape: Shape): { cells: string[]; expected: number
   switch (shape.dateShape) {
     case 'iso-offset':
       return { cells: [`${w.y}-${two(w.mo)}-${two(w.d)}T${time}${offsetText(shape.offsetMinutes)}`], expected: seconds };
+    case 'iso-basic':
+      return { cells: [`${w.y}${two(w.mo)}${two(w.d)}T${two(w.h)}${two(w.mi)}${two(w.s)}${offsetText(shape.offsetMinutes).replace(':', '')}`], expected: seconds };
     case 'iso-z-ms':
       return { cells: [new Date(t).toISOString()], expected: t };
     case 'ymd-space':
@@ -156,7 +158,7 @@ describe('round trip: write a series in a random supported shape, read it back e
         // In °F the written tenths must stay inside the plausible range once converted.
         fc.pre(shape.unit === 'C' || rows.every((row) => row.tenths / 10 >= -58 && row.tenths / 10 <= 158));
         const { bytes, expected } = writeFile(rows, shape);
-        const fixedZone = shape.dateShape === 'iso-offset' || shape.dateShape.startsWith('epoch') ? undefined : offsetText(shape.offsetMinutes);
+        const fixedZone = shape.dateShape === 'iso-offset' || shape.dateShape === 'iso-basic' || shape.dateShape.startsWith('epoch') ? undefined : offsetText(shape.offsetMinutes);
         const { summary, readings } = await readBytes(
           bytes,
           {

@@ -14,6 +14,18 @@ describe('one date-time column', () => {
     expect(readings.map((r) => r.t)).toEqual([utc('2025-01-13T07:00:00Z'), utc('2025-01-13T14:00:00.250Z'), utc('2025-01-13T09:00:00Z')]);
   });
 
+  it('ISO 8601 basic format, with and without seconds, fractions and offsets (ISO 8601 basic format, as the standard writes it without separators)', async () => {
+    const { summary, readings } = await readText(file('20250113T080000+0100', '20250113T083000.250-0530', '20250113T090000Z'), { tz: 'America/New_York' });
+    expect(summary.detected.timestamp).toMatchObject({ kind: 'datetime', format: 'YYYYMMDDTHHmmss±HHMM', zone: 'explicit offset' });
+    expect(readings.map((r) => r.t)).toEqual([utc('2025-01-13T07:00:00Z'), utc('2025-01-13T14:00:00.250Z'), utc('2025-01-13T09:00:00Z')]);
+    const local = await readText(file('20250113T0800', '20250113T0830'), { tz: 'Europe/Berlin' });
+    expect(local.readings.map((r) => r.t)).toEqual([utc('2025-01-13T07:00:00Z'), utc('2025-01-13T07:30:00Z')]);
+    expect(local.summary.detected.timestamp).toMatchObject({ format: 'YYYYMMDDTHHmm', zone: 'Europe/Berlin' });
+    // Not a time of day, or no such month: rejected with the reason, like any other row.
+    const bad = await readText(file('20250113T0800', '20251313T0900', '20250113T2560'), { tz: 'UTC' });
+    expect(bad.summary.rows).toMatchObject({ accepted: 1, rejected: 2 });
+  });
+
   it('ISO 8601 without offset takes the --tz zone, else the default zone', async () => {
     const withTz = await readText(file('2025-01-13 08:00:00'), { tz: 'Europe/Berlin' });
     expect(withTz.readings[0].t).toBe(utc('2025-01-13T07:00:00Z'));
