@@ -1,9 +1,7 @@
 import type { Pool, PoolConnection } from 'mariadb';
-import { createBlockCascade, type BlockSummary } from '../../shared/series/blocks';
-import { BLOCK_MINUTES, type BlockMinutes } from '../../shared/series/bucketGrid';
-import { replaceBlocks, type BlockSet, type Quantity } from './blockStore';
+import { BLOCK_MINUTES } from '../../shared/series/bucketGrid';
 import type { HalfOpen } from './rawReadings';
-import { readSmallestBlocks } from './smallestBlocks';
+import { rebuildBlocksInSql } from './blockSql';
 
 const MINUTE = 60_000;
 /** Rebuilds cover whole blocks of the largest size, which every smaller size divides. */
@@ -73,27 +71,14 @@ function planWork(imports: readonly ImportRow[], mark: number, now: number): Wor
 }
 
 /**
- * A stretch is rebuilt a fortnight at a time (a whole number of the largest block, so no block straddles two pieces):
- * what is held stays small however long the stretch, and each piece is one short query and one insert.
+ * A stretch is rebuilt a fortnight at a time (a whole number of the largest block, so no block straddles two pieces),
+ * so each statement stays short however long the stretch.
  */
 const PIECE_MS = 14 * 24 * 60 * MINUTE;
 
-/** Every block size of both quantities: the smallest from the database, each larger one folded from the size below. */
-async function rebuildPiece(conn: PoolConnection, loggerId: number, piece: HalfOpen): Promise<void> {
-  const smallest = await readSmallestBlocks(conn, loggerId, piece);
-  const sets: BlockSet[] = (['c', 'rh'] as Quantity[]).flatMap((quantity) => {
-    const byMinutes = new Map(BLOCK_MINUTES.map((minutes) => [minutes, [] as BlockSummary[]]));
-    const cascade = createBlockCascade(BLOCK_MINUTES, (minutes, block) => byMinutes.get(minutes as BlockMinutes)!.push(block));
-    for (const block of smallest[quantity]) cascade.push(block);
-    cascade.finish();
-    return [...byMinutes].map(([minutes, blocks]) => ({ quantity, minutes, blocks }));
-  });
-  await replaceBlocks(conn, loggerId, piece, sets);
-}
-
 async function rebuild(conn: PoolConnection, loggerId: number, span: HalfOpen): Promise<void> {
   for (let from = span.from; from < span.to; from += PIECE_MS) {
-    await rebuildPiece(conn, loggerId, { from, to: Math.min(span.to, from + PIECE_MS) });
+    await rebuildBlocksInSql(conn, loggerId, { from, to: Math.min(span.to, from + PIECE_MS) });
   }
 }
 

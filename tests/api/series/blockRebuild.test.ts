@@ -2,7 +2,8 @@
 // be exactly the blocks that folding every stored reading gives, humidity gaps, negative values and ties included.
 import fc from 'fast-check';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { createBlockCascade, type BlockSummary } from '../../../shared/series/blocks';
+import type { BlockSummary } from '../../../shared/series/blocks';
+import { createBlockCascade } from '../../support/foldBlocks';
 import { BLOCK_MINUTES } from '../../../shared/series/bucketGrid';
 import { summaryOf } from '../../../shared/series/summary';
 import { readBlocks } from '../../../server/series/blockStore';

@@ -2,7 +2,8 @@
 // builds from every reading on the same grid.
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { createBlockCascade, createBlockFolder, type BlockSummary } from '../../../shared/series/blocks';
+import type { BlockSummary } from '../../../shared/series/blocks';
+import { createBlockCascade, createBlockFolder } from '../../support/foldBlocks';
 import { planBucketGrid } from '../../../shared/series/bucketGrid';
 import { createM4, m4 } from '../../../shared/series/m4';
 import { summaryOf, type TimedValue } from '../../../shared/series/summary';
