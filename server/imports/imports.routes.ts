@@ -4,7 +4,8 @@ import { importListQuery, importSettings } from '../../shared/schemas/imports';
 import { badRequest } from '../http/errors';
 import { created, defineRoute } from '../http/route';
 import { getImport, importFile, listImports } from './imports.service';
-import { singleFileUpload } from './upload';
+import type { Reader } from './readerThread';
+import { readerAhead, singleFileUpload } from './upload';
 
 export function importRoutes(pool: Pool) {
   return [
@@ -18,10 +19,10 @@ export function importRoutes(pool: Pool) {
     }),
     defineRoute({
       // Multipart: the file in `file`, settings as fields. `dryRun` reads and reports without storing (the preview).
-      method: 'post', path: '/imports', access: 'staff', tokens: true, body: importSettings, before: singleFileUpload(),
-      async handle({ auth, body, req }) {
+      method: 'post', path: '/imports', access: 'staff', tokens: true, body: importSettings, before: [readerAhead, ...singleFileUpload()],
+      async handle({ auth, body, req, res }) {
         if (!req.file) throw badRequest('file_missing', 'Attach the logger file in the form field "file".');
-        const result = await importFile(pool, auth, { path: req.file.path, name: req.file.originalname }, body);
+        const result = await importFile(pool, auth, { path: req.file.path, name: req.file.originalname }, body, res.locals.reader as Reader);
         return result.dryRun || result.alreadyImported ? result : created(result);
       },
     }),

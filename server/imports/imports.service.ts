@@ -86,11 +86,12 @@ const iso = (t: number | null) => (t === null ? null : new Date(t).toISOString()
 /**
  * Reads one logger file and stores each new reading once. Identical files are recognised by SHA-256; overlapping
  * files add only what is new; a value that differs from the stored one is reported as a conflict. The import record
- * is written first and marked failed if anything goes wrong, so a re-run completes it with nothing twice.
+ * is written first and marked failed if anything goes wrong, so a re-run completes it with nothing twice. The file
+ * is read on `reader`'s thread, which is stopped when the import ends (an identical file stops it unused).
  */
-export async function importFile(pool: Pool, auth: AuthContext, file: IncomingFile, settings: ImportSettings): Promise<ImportOutcome> {
-  // The reader thread starts while the file is hashed and looked up; an identical file stops it unused.
-  const reader = startReader();
+export async function importFile(
+  pool: Pool, auth: AuthContext, file: IncomingFile, settings: ImportSettings, reader: Reader = startReader(),
+): Promise<ImportOutcome> {
   try {
     return await importWith(reader, pool, auth, file, settings);
   } finally {
