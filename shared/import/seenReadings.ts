@@ -3,9 +3,11 @@ const BLOCK = 1 << 16;
 
 /**
  * Readings already accepted, looked up by time for duplicate and conflict checks. Logger files are
- * nearly always in time order, so readings that extend the series go to sorted typed-array blocks
- * (binary search, no per-entry objects); only readings that arrive out of order go to a Map. A Map alone
- * for a million rows cost more than the rest of the row handling together (measured).
+ * nearly always in time order, oldest or newest first, so readings that extend the series in the file's
+ * direction (set by its first two readings) go to sorted typed-array blocks, keyed by the time or its
+ * negative so that the keys always increase (binary search, no per-entry objects); only readings that
+ * arrive out of order go to a Map. A Map alone for a million rows cost more than the rest of the row
+ * handling together, and held some 100 MB (measured).
  * Per entry: time and °C as doubles, the line as a 32-bit integer (a file with 2^32 lines would be
  * at least 8 GiB), and humidity only in blocks that hold some (20 instead of 32 bytes without it).
  */
@@ -21,13 +23,17 @@ export class SeenReadings {
   /** Null for a block whose entries have no humidity (NaN throughout). */
   private readonly humidityBlocks: (Float64Array | null)[] = [];
   private size = 0;
-  private latest = -Infinity;
+  /** The key of the last in-order entry; keys are sign × time. */
+  private latestKey = -Infinity;
+  /** +1 for oldest-first files, −1 for newest-first; decided by the second reading. */
+  private sign = 1;
   private readonly outOfOrder = new Map<number, [c: number, rh: number, line: number]>();
 
   /** Looks for a reading at time t; on success the found* fields hold it. */
   find(t: number): boolean {
-    if (t > this.latest) return false;
-    const index = this.indexOf(t);
+    const key = this.sign * t;
+    if (key > this.latestKey) return false;
+    const index = this.indexOf(key);
     if (index >= 0) {
       const block = Math.floor(index / BLOCK);
       const at = index % BLOCK;
@@ -45,7 +51,14 @@ export class SeenReadings {
 
   /** Adds a reading not found before; `rh` is NaN when there is none. */
   add(t: number, c: number, rh: number, line: number): void {
-    if (t < this.latest) {
+    if (this.size === 1 && this.sign * t < this.latestKey) {
+      // The second reading is older than the first: a newest-first file. Keys become negated times.
+      this.sign = -1;
+      this.timeBlocks[0][0] = -this.timeBlocks[0][0];
+      this.latestKey = this.timeBlocks[0][0];
+    }
+    const key = this.sign * t;
+    if (key < this.latestKey) {
       this.outOfOrder.set(t, [c, rh, line]);
       return;
     }
@@ -57,24 +70,24 @@ export class SeenReadings {
       this.humidityBlocks.push(null);
     }
     const block = this.timeBlocks.length - 1;
-    this.timeBlocks[block][at] = t;
+    this.timeBlocks[block][at] = key;
     this.celsiusBlocks[block][at] = c;
     this.lineBlocks[block][at] = line;
     // Slots start as NaN and are written once, so only a reading with humidity needs storing.
     if (!Number.isNaN(rh)) (this.humidityBlocks[block] ??= new Float64Array(BLOCK).fill(Number.NaN))[at] = rh;
     this.size++;
-    this.latest = t;
+    this.latestKey = key;
   }
 
-  /** Binary search over the in-order entries; -1 when t is not among them. */
-  private indexOf(t: number): number {
+  /** Binary search over the in-order entries' keys; -1 when the key is not among them. */
+  private indexOf(key: number): number {
     let low = 0;
     let high = this.size - 1;
     while (low <= high) {
       const middle = (low + high) >> 1;
       const at = this.timeBlocks[Math.floor(middle / BLOCK)][middle % BLOCK];
-      if (at === t) return middle;
-      if (at < t) low = middle + 1;
+      if (at === key) return middle;
+      if (at < key) low = middle + 1;
       else high = middle - 1;
     }
     return -1;
