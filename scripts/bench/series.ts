@@ -7,7 +7,7 @@ import { Nursery } from '../../server/nurseries/nursery.model';
 import { sqlInstant } from '../../server/readings/readingStore';
 import { Room } from '../../server/rooms/room.model';
 import { MAX_GAP_MS } from '../../server/series/roomSeries';
-import { streamRaw } from '../../server/series/rawReadings';
+import { rangeQuery, type RawRow } from '../../server/series/rawReadings';
 import { createM4 } from '../../shared/series/m4';
 import type { PackedLine } from '../../shared/series/packedLine';
 import { median, openBenchDatabase, printTable, startBenchServer, timed } from './benchSupport';
@@ -82,7 +82,8 @@ async function main() {
     const conn = await db.pool.getConnection();
     try {
       const m4 = createM4({ origin: START, span: END - START + 1, count: WIDTH, blockMinutes: null }, MAX_GAP_MS);
-      await streamRaw(conn, logger.id, { from: START, to: END + 1 }, ([t, c]) => m4.pushReading(t, c));
+      const { sql, values } = rangeQuery(logger.id, [{ from: START, to: END + 1 }]);
+      for await (const [t, c] of conn.queryStream({ sql, rowsAsArray: true }, values) as AsyncIterable<RawRow>) m4.pushReading(t, c);
       return m4.finish().length;
     } finally {
       conn.release();

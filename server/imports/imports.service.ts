@@ -15,7 +15,7 @@ import { Import } from './import.model';
 import { lockLogger } from './importLock';
 import { wholeFile } from './fileSegments';
 import { LINE, STRIDE, T, countOf, unpackReadings, type PackedReadings } from './packedReadings';
-import { startReader, type Reader } from './readerThread';
+import type { Reader } from './readerThread';
 
 export interface IncomingFile {
   path: string;
@@ -89,9 +89,7 @@ const iso = (t: number | null) => (t === null ? null : new Date(t).toISOString()
  * is written first and marked failed if anything goes wrong, so a re-run completes it with nothing twice. The file
  * is read on `reader`'s thread, which is stopped when the import ends (an identical file stops it unused).
  */
-export async function importFile(
-  pool: Pool, auth: AuthContext, file: IncomingFile, settings: ImportSettings, reader: Reader = startReader(),
-): Promise<ImportOutcome> {
+export async function importFile(pool: Pool, auth: AuthContext, file: IncomingFile, settings: ImportSettings, reader: Reader): Promise<ImportOutcome> {
   try {
     return await importWith(reader, pool, auth, file, settings);
   } finally {

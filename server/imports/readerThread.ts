@@ -19,7 +19,7 @@ export interface Reader {
  * thread it held up every other request, and the connection streaming the import's readings to MariaDB (LOAD DATA
  * LOCAL) got a turn only between pieces of parsing, so the load ran at a quarter of its speed (measured). One thread
  * per file, stopped after it: after a large file a thread holds some 75 MB (measured on a million rows) that only
- * stopping it gives back. Starting one takes about 0.3 s, so the importer starts it before it hashes the file.
+ * stopping it gives back. Starting one takes about 0.3 s, so it is started as the upload begins (readerAhead).
  */
 export function startReader(): Reader {
   const worker = new Worker(ENTRY);

@@ -94,8 +94,8 @@ export class ReadingSpool {
         await rm(path, { force: true });
       }
     });
-    // Reading stays at most one chunk ahead of the database. Both want a core; a reader running ahead only leaves
-    // the loads to finish alone at the end, with the other core idle (measured: a third of the import).
+    // Reading stays at most AHEAD chunks ahead of the database. Both want a core; a reader running further ahead only
+    // leaves the loads to finish alone at the end, with the other core idle (measured: a third of the import).
     this.queued.push(this.loading);
     while (this.queued.length > AHEAD) await this.queued.shift();
   }

@@ -1,4 +1,4 @@
-import type { Pool, PoolConnection } from 'mariadb';
+import type { Pool } from 'mariadb';
 import { sqlInstant } from '../readings/readingStore';
 
 /** A half-open stretch [from, to) in epoch ms. */
@@ -10,7 +10,8 @@ export interface HalfOpen {
 /** [epoch ms, °C, % RH or null], as the connector hands rows over with rowsAsArray. */
 export type RawRow = [number, number, number | null];
 
-function rangeQuery(loggerId: number, ranges: readonly HalfOpen[]) {
+/** The SELECT of one logger's readings inside any of the ranges, in time order, with its parameters. */
+export function rangeQuery(loggerId: number, ranges: readonly HalfOpen[]) {
   const wanted = ranges.filter((r) => r.to > r.from);
   return {
     sql: `SELECT CAST(UNIX_TIMESTAMP(t) * 1000 AS SIGNED), c, rh FROM readings
@@ -24,10 +25,4 @@ export async function readRaw(pool: Pool, loggerId: number, ranges: readonly Hal
   if (!ranges.some((r) => r.to > r.from)) return [];
   const { sql, values } = rangeQuery(loggerId, ranges);
   return (await pool.query({ sql, rowsAsArray: true }, values)) as RawRow[];
-}
-
-/** The same rows streamed, for long stretches that should not sit in memory at once. */
-export async function streamRaw(conn: PoolConnection, loggerId: number, range: HalfOpen, onRow: (row: RawRow) => void): Promise<void> {
-  const { sql, values } = rangeQuery(loggerId, [range]);
-  for await (const row of conn.queryStream({ sql, rowsAsArray: true }, values)) onRow(row as RawRow);
 }

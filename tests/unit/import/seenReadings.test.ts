@@ -5,7 +5,7 @@ import { SeenReadings } from '../../../shared/import/seenReadings';
 // The reference is a plain Map from time to reading: SeenReadings must answer every look-up exactly as it does,
 // whatever order the times come in (oldest first, newest first, or shuffled).
 describe('SeenReadings', () => {
-  const run = (times: number[]) => {
+  const run = (times: readonly number[]) => {
     const seen = new SeenReadings();
     const reference = new Map<number, [number, number, number]>();
     times.forEach((t, i) => {
